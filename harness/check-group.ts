@@ -1,0 +1,54 @@
+import type { Adapter, Capability } from '../adapters/adapter.js';
+import type { Evidence } from './evidence.js';
+import type { RandomStream } from './numeric/random-stream.js';
+import type { RunSettings } from './run-settings.js';
+
+/** One check as the plan knows it before anything runs. */
+export interface PlannedCheck {
+  /** Unique and stable for a given seed and settings; `--only ID` replays it. */
+  readonly id: string;
+  readonly title: string;
+  readonly parameters: Readonly<Record<string, string | number>>;
+}
+
+/** What running one check found. */
+export type CheckFinding =
+  | {
+      readonly state: 'measured';
+      readonly evidence: Evidence;
+      /** Where the matrices and the statistic came from (implementation or harness). */
+      readonly path: string;
+    }
+  | { readonly state: 'skipped'; readonly reason: string };
+
+export interface CheckContext {
+  readonly adapter: Adapter;
+  readonly capabilities: ReadonlySet<Capability>;
+  readonly settings: RunSettings;
+  /** The random stream for draw `index` of the stream named `key`, under the run's seed. */
+  stream(key: string, index: number): RandomStream;
+  /** A 32-bit seed for an implementation's own sampler, derived from the run's seed. */
+  derivedSeed(key: string, index: number): number;
+}
+
+/**
+ * Checks that share their samples (for instance E⟨G(z)⟩ at several z from the same matrices) run
+ * as one group; each yields its own verdict. A group is the unit of scheduling and of failure: an
+ * adapter fault inside it faults each of its checks, and the rest of the run goes on.
+ */
+export interface CheckGroup {
+  readonly id: string;
+  readonly suite: string;
+  readonly checks: readonly PlannedCheck[];
+  /** Why this group cannot run with these capabilities, or null when it can. */
+  skipReason(capabilities: ReadonlySet<Capability>): string | null;
+  /** One finding per planned check, in the same order. */
+  run(context: CheckContext): Promise<CheckFinding[]>;
+}
+
+/** A property suite: given the settings, the groups of checks to run. */
+export interface PropertySuite {
+  readonly name: string;
+  readonly description: string;
+  plan(settings: RunSettings): CheckGroup[];
+}

@@ -1,0 +1,27 @@
+import type { EnsembleSpec } from './numeric/ensemble.js';
+
+/**
+ * Everything a run needs, fully defaulted: resolved once from the CLI, a config or an API call,
+ * so nothing downstream checks for undefined.
+ */
+export interface RunSettings {
+  readonly suites: readonly string[];
+  /** Matrix sizes N for the per-size checks. */
+  readonly sizes: readonly number[];
+  /** Matrices per statistical estimate. */
+  readonly samples: number;
+  /** The run's seed: every random stream and every drawn parameter derives from it. */
+  readonly seed: number;
+  /** Family-wise false-alarm level over the run's statistical checks (Holm). */
+  readonly alpha: number;
+  readonly ensembles: readonly EnsembleSpec[];
+  /** Run only the checks with these ids (empty: all). */
+  readonly only: readonly string[];
+  /** The CLI words that select the adapter, for replay commands (e.g. `--module ./kernel.js`). */
+  readonly adapterArguments: string;
+}
+
+export const DEFAULT_ALPHA = 1e-3;
+export const DEFAULT_SAMPLES = 300;
+export const DEFAULT_SIZES: readonly number[] = [200];
+export const DEFAULT_SEED = 20261202;
