@@ -18,6 +18,8 @@ export type CheckFinding =
       readonly evidence: Evidence;
       /** Where the matrices and the statistic came from (implementation or harness). */
       readonly path: string;
+      /** For a randomised check that failed: fast-check's path of the shrunk case, for `--case`. */
+      readonly replayCase?: string;
     }
   | { readonly state: 'skipped'; readonly reason: string };
 

@@ -1,0 +1,228 @@
+import {
+  ALL_CAPABILITIES,
+  AdapterFault,
+  EnsembleNotOffered,
+  type Adapter,
+  type AdapterDescription,
+  type Capability,
+} from '../adapter.js';
+import type { Complex } from '../../harness/numeric/complex.js';
+import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
+import { BoundedTextLog } from './bounded-text-log.js';
+import { JsonRpcClient, type RpcOutcome } from './json-rpc-client.js';
+import { decodeMatrix, type WireMatrix } from './matrix-codec.js';
+import { resolveProcessAdapterOptions, type ProcessAdapterOptions, type ResolvedProcessAdapterOptions } from './process-adapter-options.js';
+import { PROTOCOL_ERROR_CODES } from './protocol-error-codes.js';
+import { resultProblem, type ProtocolMethod } from './protocol-schemas.js';
+import { requestParams } from './request-params.js';
+import { resultChecks } from './result-checks.js';
+import { complexFromWire, realFromWire, type WireComplex, type WireReal } from './wire-numbers.js';
+
+const MAX_WARNINGS = 100;
+const NOTE_PREFIX = '[rmt-assay] ';
+
+/**
+ * An implementation in another process, reached through the JSON-RPC protocol of PROTOCOL.md.
+ *
+ * Every response is checked against its JSON Schema, then for what a schema cannot say (counts,
+ * finite numbers, matrix sizes). A misbehaving program becomes an AdapterFault naming the method;
+ * when the conversation cannot go on (crash, timeout, garbled output, wrong id, an over-long line)
+ * the program is stopped and the next call starts it anew, with `describe` first, so one bad answer
+ * costs one check. Requests are sent one at a time, in call order.
+ */
+export class ProcessAdapter implements Adapter {
+  private client: JsonRpcClient | undefined;
+  private readonly stopping = new Set<Promise<unknown>>();
+  private queue: Promise<unknown> = Promise.resolve();
+  private closed = false;
+  private description: AdapterDescription | undefined;
+  private readonly stderrAndNotes: BoundedTextLog;
+  private readonly warningList: string[] = [];
+  private droppedWarnings = 0;
+
+  private constructor(
+    readonly command: string,
+    private readonly options: ResolvedProcessAdapterOptions,
+  ) {
+    this.stderrAndNotes = new BoundedTextLog(options.maxLogChars);
+  }
+
+  /**
+   * Starts `command` through the shell and asks it `describe`. Throws AdapterFault 'unavailable'
+   * (method 'describe') when the program does not start or does not answer describe properly.
+   */
+  static async start(command: string, options?: ProcessAdapterOptions): Promise<ProcessAdapter> {
+    const adapter = new ProcessAdapter(command, resolveProcessAdapterOptions(options));
+    try {
+      await adapter.enqueue(() => adapter.liveClient('describe'));
+    } catch (error) {
+      await adapter.close();
+      throw error;
+    }
+    return adapter;
+  }
+
+  describe(): Promise<AdapterDescription> {
+    if (this.description === undefined) return Promise.reject(new AdapterFault('describe', 'unavailable', 'the program has not described itself'));
+    return Promise.resolve(this.description);
+  }
+
+  async eigenvalues(matrix: SquareMatrix): Promise<Float64Array> {
+    const method = 'eigenvalues';
+    const result = (await this.resultOf(method, requestParams.eigenvalues(matrix))) as { values: WireReal[] };
+    resultChecks.count(method, '/result/values', result.values.length, matrix.size, `one per row of the ${matrix.size}×${matrix.size} matrix`);
+    const values = Float64Array.from(result.values, realFromWire);
+    resultChecks.finiteReals(method, '/result/values', values);
+    return values;
+  }
+
+  async resolventTrace(matrix: SquareMatrix, points: readonly Complex[], weight?: SquareMatrix): Promise<Complex[]> {
+    const method = 'resolvent_trace';
+    const result = (await this.resultOf(method, requestParams.resolventTrace(matrix, points, weight))) as { values: WireComplex[] };
+    resultChecks.count(method, '/result/values', result.values.length, points.length, 'one per point');
+    const values = result.values.map(complexFromWire);
+    resultChecks.finiteComplexes(method, '/result/values', values);
+    return values;
+  }
+
+  async chainTrace(matrix: SquareMatrix, points: readonly Complex[], weights: readonly SquareMatrix[]): Promise<Complex> {
+    const method = 'chain_trace';
+    const result = (await this.resultOf(method, requestParams.chainTrace(matrix, points, weights))) as { value: WireComplex };
+    const value = complexFromWire(result.value);
+    resultChecks.finiteComplexes(method, '/result', [value]);
+    return value;
+  }
+
+  async sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): Promise<SquareMatrix[]> {
+    const method = 'sample';
+    const outcome = await this.request(method, requestParams.sample(ensemble, size, seed, count));
+    if (outcome.kind === 'error' && outcome.code === PROTOCOL_ERROR_CODES.ensembleNotOffered) {
+      throw new EnsembleNotOffered(ensembleLabel(ensemble));
+    }
+    const result = this.checkedResult(method, outcome) as { matrices: WireMatrix[] };
+    resultChecks.count(method, '/result/matrices', result.matrices.length, count, 'the requested count');
+    const field = ensembleConstants(ensemble, size).field;
+    return result.matrices.map((wire, k) => {
+      const path = `/result/matrices/${k}`;
+      const matrix = decodeMatrix(wire, method, path);
+      if (matrix.size !== size || matrix.field !== field) {
+        throw new AdapterFault(method, 'malformed-response', `${method}: ${path} is a ${matrix.size}×${matrix.size} ${matrix.field} matrix; ${ensembleLabel(ensemble)} at size ${size} needs ${size}×${size} ${field}`);
+      }
+      resultChecks.finiteMatrix(method, path, matrix);
+      return matrix;
+    });
+  }
+
+  /**
+   * What the program wrote to stderr (the last maxLogChars characters, across restarts), with the
+   * adapter's notes: restarts and stdout lines that were not messages, prefixed "[rmt-assay] ".
+   */
+  log(): string {
+    return this.stderrAndNotes.text();
+  }
+
+  /** Things the report should show that were not faults: ignored stdout lines, restarts. */
+  warnings(): readonly string[] {
+    return this.droppedWarnings === 0 ? [...this.warningList] : [`(${this.droppedWarnings} earlier warnings dropped)`, ...this.warningList];
+  }
+
+  /** Stops the program (SIGTERM, SIGKILL after the grace period) and waits until it is reaped. */
+  async close(): Promise<void> {
+    this.closed = true;
+    if (this.client !== undefined) this.retire(this.client);
+    // A request in flight fails at once (its program is being stopped); wait for it to settle
+    // before waiting for the programs, so that nothing is started after close.
+    await this.queue;
+    await Promise.all([...this.stopping]);
+  }
+
+  private async resultOf(method: ProtocolMethod, params: object): Promise<unknown> {
+    return this.checkedResult(method, await this.request(method, params));
+  }
+
+  /** A result that passed its schema; a JSON-RPC error becomes an 'implementation-error' fault. */
+  private checkedResult(method: ProtocolMethod, outcome: RpcOutcome): unknown {
+    if (outcome.kind === 'error') {
+      throw new AdapterFault(method, 'implementation-error', `${method}: the implementation answered error ${outcome.code}: ${outcome.message}`);
+    }
+    const problem = resultProblem(method, outcome.result);
+    if (problem !== undefined) throw new AdapterFault(method, 'malformed-response', `${method}: the result does not have the protocol's shape: ${problem}`);
+    return outcome.result;
+  }
+
+  private request(method: ProtocolMethod, params: object | undefined): Promise<RpcOutcome> {
+    return this.enqueue(async () => {
+      const client = await this.liveClient(method);
+      try {
+        return await client.call(method, params, this.options.timeoutMs);
+      } catch (error) {
+        if (!(error instanceof AdapterFault) || client.usable) throw error;
+        this.retire(client, `${error.kind} in ${method}`);
+        throw new AdapterFault(error.method, error.kind, `${error.message}; the program was stopped and the next call starts it anew`);
+      }
+    });
+  }
+
+  /** Runs requests one after another, whatever became of the previous one. */
+  private enqueue<T>(task: () => Promise<T>): Promise<T> {
+    const run = this.queue.then(task, task);
+    this.queue = run.catch(() => undefined);
+    return run;
+  }
+
+  /** The running program, started (and described) first if there is none or the last one broke. */
+  private async liveClient(method: ProtocolMethod): Promise<JsonRpcClient> {
+    if (this.closed) throw new AdapterFault(method, 'unavailable', `${method}: the adapter is closed`);
+    if (this.client?.usable) return this.client;
+    if (this.client !== undefined) this.retire(this.client, 'the program ended');
+    await Promise.all([...this.stopping]);
+    if (this.closed) throw new AdapterFault(method, 'unavailable', `${method}: the adapter is closed`);
+    const restarting = this.description !== undefined;
+    if (restarting) this.note(`starting the program again for ${method}: ${this.command}`);
+    const client = new JsonRpcClient(this.command, {
+      cwd: this.options.cwd,
+      env: this.options.env,
+      maxResponseBytes: this.options.maxResponseBytes,
+      killGraceMs: this.options.killGraceMs,
+      log: this.stderrAndNotes,
+      onNoise: (line) => this.note(`stdout line that is not a message, ignored: ${JSON.stringify(line.length > 200 ? `${line.slice(0, 200)}…` : line)}`),
+    });
+    this.client = client;
+    try {
+      const outcome = await client.call('describe', undefined, this.options.startTimeoutMs);
+      this.description ??= this.describedAs(outcome);
+      if (restarting) this.describedAs(outcome);
+      return client;
+    } catch (error) {
+      this.retire(client);
+      const why = error instanceof Error ? error.message : String(error);
+      throw new AdapterFault(method, 'unavailable', `${method}: the program \`${this.command}\` did not start: ${why}`);
+    }
+  }
+
+  private describedAs(outcome: RpcOutcome): AdapterDescription {
+    const result = this.checkedResult('describe', outcome) as { name: string; version: string; capabilities: string[] };
+    const known = result.capabilities.filter((c): c is Capability => (ALL_CAPABILITIES as readonly string[]).includes(c));
+    const unknown = result.capabilities.filter((c) => !(ALL_CAPABILITIES as readonly string[]).includes(c) && c !== 'describe');
+    if (unknown.length > 0 && this.description === undefined) this.note(`capabilities this harness does not use, ignored: ${unknown.join(', ')}`);
+    return { name: result.name, version: result.version, kind: 'process', capabilities: known };
+  }
+
+  private retire(client: JsonRpcClient, reason?: string): void {
+    if (this.client === client) this.client = undefined;
+    if (reason !== undefined) this.note(`stopping the program after ${reason}`);
+    const stopped = client.close();
+    this.stopping.add(stopped);
+    void stopped.then(() => this.stopping.delete(stopped));
+  }
+
+  private note(text: string): void {
+    this.stderrAndNotes.append(`${NOTE_PREFIX}${text}\n`);
+    this.warningList.push(text);
+    if (this.warningList.length > MAX_WARNINGS) {
+      this.warningList.shift();
+      this.droppedWarnings++;
+    }
+  }
+}

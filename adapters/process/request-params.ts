@@ -1,0 +1,48 @@
+import type { Complex } from '../../harness/numeric/complex.js';
+import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
+import { encodeMatrix, type WireMatrix } from './matrix-codec.js';
+
+/**
+ * The params object of each protocol request (schemas/METHOD.params.json), built from harness
+ * values. The harness only sends finite numbers: a non-finite point or seed is a bug upstream and
+ * throws a RangeError here rather than travelling as JSON null.
+ */
+export const requestParams = {
+  eigenvalues(matrix: SquareMatrix): { matrix: WireMatrix } {
+    return { matrix: encodeMatrix(matrix) };
+  },
+
+  resolventTrace(
+    matrix: SquareMatrix,
+    points: readonly Complex[],
+    weight?: SquareMatrix,
+  ): { matrix: WireMatrix; points: [number, number][]; weight?: WireMatrix } {
+    const params = { matrix: encodeMatrix(matrix), points: points.map(pointToWire) };
+    return weight === undefined ? params : { ...params, weight: encodeMatrix(weight) };
+  },
+
+  chainTrace(
+    matrix: SquareMatrix,
+    points: readonly Complex[],
+    weights: readonly SquareMatrix[],
+  ): { matrix: WireMatrix; points: [number, number][]; weights: WireMatrix[] } {
+    if (points.length !== weights.length || points.length === 0) {
+      throw new RangeError(`a chain needs as many weights as points, at least one: got ${points.length} points and ${weights.length} weights`);
+    }
+    return { matrix: encodeMatrix(matrix), points: points.map(pointToWire), weights: weights.map(encodeMatrix) };
+  },
+
+  sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): { ensemble: EnsembleSpec; size: number; seed: number; count: number } {
+    for (const [name, value, min] of [['size', size, 1], ['seed', seed, 0], ['count', count, 1]] as const) {
+      if (!Number.isSafeInteger(value) || value < min) throw new RangeError(`sample: ${name} must be an integer ≥ ${min}, not ${value}`);
+    }
+    // JSON.stringify drops an undefined meanDegree, which is the wire form of an absent one.
+    return { ensemble, size, seed, count };
+  },
+};
+
+function pointToWire(z: Complex): [number, number] {
+  if (!Number.isFinite(z.re) || !Number.isFinite(z.im)) throw new RangeError(`a spectral parameter must be finite, not (${z.re}, ${z.im})`);
+  return [z.re, z.im];
+}

@@ -1,0 +1,81 @@
+import { AdapterFault } from '../../adapters/adapter.js';
+import { SUITES, suiteNames } from '../../properties/suite-registry.js';
+import { jsonReporter } from '../reporters/json-reporter.js';
+import type { Reporter } from '../reporters/reporter.js';
+import { terminalReporter } from '../reporters/terminal-reporter.js';
+import { runChecks } from '../run-checks.js';
+import type { RunResult } from '../run-result.js';
+import type { RunSettings } from '../run-settings.js';
+import { openAdapter } from './open-adapter.js';
+import { parseReplayCase, parseAlpha, parseEnsembleList, parseLadder, parseNameList, parseSizeList, parseWholeNumber } from './parse-values.js';
+import { UsageError } from './usage-error.js';
+
+/** The `check` command's arguments as yargs hands them over. */
+export interface CheckArguments {
+  readonly module?: string;
+  readonly suite: string;
+  readonly size: string | number;
+  readonly ladder: string | number;
+  readonly samples: number;
+  readonly seed: number;
+  readonly alpha: number;
+  readonly ensemble: string;
+  readonly only?: readonly string[];
+  readonly case?: string;
+  readonly report?: string;
+  readonly verbose: boolean;
+}
+
+export function resolveSettings(args: CheckArguments, adapterArguments: string): RunSettings {
+  return {
+    suites: parseNameList('suite', args.suite, suiteNames()),
+    sizes: parseSizeList(args.size),
+    ladder: parseLadder(args.ladder),
+    samples: parseWholeNumber('samples', args.samples, 2, 10_000_000),
+    seed: parseWholeNumber('seed', args.seed, 0),
+    alpha: parseAlpha(args.alpha),
+    ensembles: parseEnsembleList(args.ensemble),
+    only: args.only ?? [],
+    replayCase: parseReplayCase(args.case, args.only),
+    adapterArguments,
+  };
+}
+
+/** Exit code: 0 when every check passed (skips allowed), 1 when one failed or faulted. */
+export function exitCodeOf(result: RunResult): number {
+  return result.counts.fail + result.counts.fault > 0 ? 1 : 0;
+}
+
+export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStream): Promise<number> {
+  if (args.module !== undefined && args.module.trim() === '') throw new UsageError('--module needs a file');
+  // Validate everything before starting an implementation.
+  resolveSettings(args, '');
+  const opened = await openAdapter({ module: args.module });
+  try {
+    const settings = resolveSettings(args, opened.arguments);
+    const interactive = out.isTTY === true && process.env.CI !== 'true';
+    const reporters: Reporter[] = [terminalReporter(out, { interactive, verbose: args.verbose })];
+    if (args.report !== undefined) reporters.push(jsonReporter(args.report));
+    const suites = settings.suites.map((name) => SUITES.get(name)!);
+    let result: RunResult;
+    try {
+      result = await runChecks(
+        opened.adapter,
+        settings,
+        suites,
+        {
+          onRunStart: (info) => reporters.forEach((r) => r.onRunStart?.(info)),
+          onCheckFinished: (o, n, t) => reporters.forEach((r) => r.onCheckFinished?.(o, n, t)),
+        },
+        opened.log,
+      );
+    } catch (error) {
+      if (error instanceof AdapterFault) throw new UsageError(`the implementation cannot run: ${error.method}: ${error.message}`);
+      throw error;
+    }
+    for (const r of reporters) await r.onRunEnd?.(result);
+    return exitCodeOf(result);
+  } finally {
+    await opened.adapter.close();
+  }
+}

@@ -1,0 +1,53 @@
+import { DEFAULT_ALPHA, DEFAULT_LADDER, DEFAULT_SAMPLES, DEFAULT_SEED, DEFAULT_SIZES } from '../run-settings.js';
+
+/**
+ * The `check` command's options, declared once: yargs is configured from this table, and so is
+ * everything else that needs to know the options (help text, a config file's schema).
+ */
+export interface OptionDeclaration {
+  readonly type: 'string' | 'number' | 'boolean';
+  readonly array?: boolean;
+  readonly describe: string;
+  readonly default?: string | number | boolean;
+  readonly group: 'Adapter' | 'Run' | 'Output';
+}
+
+export const CHECK_OPTIONS = {
+  module: {
+    type: 'string',
+    describe: 'check a JavaScript module exporting eigenvalues / resolventTrace / chainTrace / sample',
+    group: 'Adapter',
+  },
+  suite: { type: 'string', describe: 'suites to run, comma-separated', default: 'semicircle', group: 'Run' },
+  size: { type: 'string', describe: 'matrix sizes N, comma-separated', default: DEFAULT_SIZES.join(','), group: 'Run' },
+  ladder: {
+    type: 'string',
+    describe: 'matrix sizes of the rate-of-convergence fits, comma-separated, at least three',
+    default: DEFAULT_LADDER.join(','),
+    group: 'Run',
+  },
+  samples: { type: 'number', describe: 'matrices per statistical estimate', default: DEFAULT_SAMPLES, group: 'Run' },
+  seed: { type: 'number', describe: 'seed of every random stream and drawn parameter', default: DEFAULT_SEED, group: 'Run' },
+  alpha: {
+    type: 'number',
+    describe: 'family-wise false-alarm level over the statistical checks (Holm)',
+    default: DEFAULT_ALPHA,
+    group: 'Run',
+  },
+  ensemble: {
+    type: 'string',
+    describe: 'ensembles: goe, gue, wigner:real|complex:LAW[:d=DEGREE]:diag=LAW[:VARIANCE], comma-separated',
+    default: 'goe,gue',
+    group: 'Run',
+  },
+  only: { type: 'string', array: true, describe: 'run only the check with this id (repeatable)', group: 'Run' },
+  case: {
+    type: 'string',
+    describe: "replay one randomised case of the check named by --only (fast-check's path, from a replay command)",
+    group: 'Run',
+  },
+  report: { type: 'string', describe: 'write the JSON report to this file', group: 'Output' },
+  verbose: { type: 'boolean', describe: 'list passing checks too', default: false, group: 'Output' },
+} as const satisfies Record<string, OptionDeclaration>;
+
+export type CheckOptionName = keyof typeof CHECK_OPTIONS;

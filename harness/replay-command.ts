@@ -1,0 +1,27 @@
+import { ensembleLabel } from './numeric/ensemble.js';
+import type { RunSettings } from './run-settings.js';
+
+/** Quotes a word for a POSIX shell when it holds anything but plain characters. */
+export function shellQuote(word: string): string {
+  return /^[A-Za-z0-9_./:=,@%+-]+$/.test(word) ? word : `'${word.replace(/'/g, `'\\''`)}'`;
+}
+
+/**
+ * The command that re-runs one check: the same adapter, suite, sizes, samples, seed and
+ * ensembles (so every drawn parameter and random stream is the same), restricted by --only.
+ */
+export function replayCommand(settings: RunSettings, suite: string, checkId: string, replayCase = ''): string {
+  const words = [
+    'npx rmt-assay check',
+    settings.adapterArguments,
+    `--suite ${suite}`,
+    `--size ${settings.sizes.join(',')}`,
+    `--ladder ${settings.ladder.join(',')}`,
+    `--samples ${settings.samples}`,
+    `--seed ${settings.seed}`,
+    `--ensemble ${shellQuote(settings.ensembles.map(ensembleLabel).join(','))}`,
+    `--only ${shellQuote(checkId)}`,
+    replayCase === '' ? '' : `--case ${replayCase}`,
+  ];
+  return words.filter((w) => w.length > 0).join(' ');
+}

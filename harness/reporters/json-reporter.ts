@@ -1,0 +1,28 @@
+import { writeFileSync } from 'node:fs';
+import type { RunResult } from '../run-result.js';
+import type { Reporter } from './reporter.js';
+
+/**
+ * The whole result model as JSON, for machines. Non-finite numbers, which JSON cannot hold, are
+ * written as the strings "NaN", "Infinity" and "-Infinity"; −0 as "-0".
+ */
+export function resultToJson(result: RunResult): string {
+  return JSON.stringify(
+    result,
+    (_key, value) => {
+      if (typeof value === 'number' && (!Number.isFinite(value) || Object.is(value, -0))) {
+        return Object.is(value, -0) ? '-0' : String(value);
+      }
+      return value;
+    },
+    2,
+  );
+}
+
+export function jsonReporter(file: string): Reporter {
+  return {
+    onRunEnd(result) {
+      writeFileSync(file, resultToJson(result) + '\n');
+    },
+  };
+}

@@ -1,0 +1,85 @@
+import type { CheckFinding, CheckGroup } from '../../harness/check-group.js';
+import { ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import { weightedSlope } from '../../harness/estimators/weighted-slope.js';
+import type { RunSettings } from '../../harness/run-settings.js';
+import { toleranceTest } from '../../harness/tolerance-test.js';
+import { KOLMOGOROV_RATE } from '../../reference-values/kolmogorov-rate.js';
+import { kolmogorovDistanceToSemicircle } from '../support/kolmogorov-distance.js';
+import { matrixSource } from '../support/matrix-source.js';
+import { RunningMeans } from '../support/running-means.js';
+import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from '../support/spectral-statistics.js';
+
+/**
+ * Samples at size N: the distance concentrates (its spread shrinks like its mean), so fewer large
+ * matrices give the same relative precision; K_N = max(8, ⌈K·100/(3N)⌉) keeps the cost of the
+ * largest size near that of the smallest.
+ */
+export function samplesAtSize(samples: number, size: number): number {
+  return Math.max(8, Math.ceil((samples * 100) / (3 * size)));
+}
+
+/**
+ * The rate of convergence of the empirical spectral distribution to the semicircle: the mean
+ * Kolmogorov distance at each size of a ladder, and the weighted least-squares slope of log E D_N
+ * on log N, against the known exponent −1 (up to logarithms).
+ */
+export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettings): CheckGroup {
+  const label = ensembleLabel(ensemble);
+  const ladder = [...settings.ladder];
+  const id = `semicircle/kolmogorov-decay/${label}/N=${ladder.join(',')}`;
+  return {
+    id,
+    suite: 'semicircle',
+    checks: [
+      {
+        id,
+        title: 'log–log slope of the Kolmogorov distance to the semicircle over N',
+        parameters: { ensemble: label, N: ladder.join(','), samples: ladder.map((n) => samplesAtSize(settings.samples, n)).join(',') },
+      },
+    ],
+    skipReason: (capabilities) => nothingToExercise(capabilities, 'eigenvalues'),
+    async run(context): Promise<CheckFinding[]> {
+      const logN: number[] = [];
+      const logD: number[] = [];
+      const sigma: number[] = [];
+      const means: string[] = [];
+      let matrices = '';
+      let total = 0;
+      for (const size of ladder) {
+        const count = samplesAtSize(settings.samples, size);
+        const source = await matrixSource(context, `${id}/N=${size}`, ensemble, size, count, false);
+        matrices = source.description.replace(/, N = \d+, \d+ matrices/, '');
+        const sums = new RunningMeans(1);
+        const row = new Float64Array(1);
+        for await (const matrix of source.matrices) {
+          row[0] = kolmogorovDistanceToSemicircle(await spectrumOf(context, matrix));
+          sums.add(row);
+        }
+        total += sums.count;
+        const mean = sums.meanOf(0);
+        logN.push(Math.log(size));
+        logD.push(Math.log(mean));
+        // Delta method: se(log D̄) = se(D̄)/D̄.
+        sigma.push(sums.standardErrorOf(0) / mean);
+        means.push(`N=${size}: ${mean.toPrecision(4)}`);
+      }
+      const fit = weightedSlope(logN, logD, sigma);
+      return [
+        {
+          state: 'measured',
+          path: `${pathDescription(matrices, 'eigenvalues', eigenvalueOrigin(context))}; mean distances ${means.join(', ')}`,
+          evidence: toleranceTest({
+            observed: fit.slope,
+            expected: KOLMOGOROV_RATE.exponent,
+            expectedSource: KOLMOGOROV_RATE.source,
+            standardError: fit.standardError,
+            standardErrorMethod: 'weighted least squares on log N, weights from the delta-method standard errors se(D̄_N)/D̄_N of each size\'s mean',
+            allowance: KOLMOGOROV_RATE.slopeAllowance,
+            allowanceReason: KOLMOGOROV_RATE.slopeAllowanceReason,
+            sampleCount: total,
+          }),
+        },
+      ];
+    },
+  };
+}

@@ -1,0 +1,115 @@
+import type { CheckFinding, CheckGroup } from '../../harness/check-group.js';
+import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import type { RunSettings } from '../../harness/run-settings.js';
+import { toleranceTest } from '../../harness/tolerance-test.js';
+import {
+  evenMomentCorrection,
+  exactEvenMomentGOE,
+  exactEvenMomentGUE,
+} from '../../reference-values/finite-n-corrections.js';
+import { semicircleEvenMoment } from '../../reference-values/semicircle-law.js';
+import { expansionParameter } from '../support/expansion-parameter.js';
+import { matrixSource } from '../support/matrix-source.js';
+import { RunningMeans } from '../support/running-means.js';
+import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from '../support/spectral-statistics.js';
+
+/** Moments E⟨H^{2k}⟩ for k = 1 … MAX_K. */
+const MAX_K = 4;
+
+/**
+ * GOE's coefficients of N⁻² and N⁻³ in E⟨H^{2k}⟩ (from E Tr X^{2k} = 2N³ + 5N² + 5N, 5N⁴ + 22N³ +
+ * 52N² + 41N, 14N⁵ + 93N⁴ + 374N³ + 690N² + 509N; ../shared/THEORY.md, exact Wick enumeration),
+ * the scale of the terms a general Wigner ensemble's expansion leaves out after its 1/N term.
+ */
+const GOE_SECOND_ORDER: readonly number[] = [0, 0, 5, 52, 374];
+const GOE_THIRD_ORDER: readonly number[] = [0, 0, 0, 41, 690];
+
+interface MomentReference {
+  readonly value: number;
+  readonly source: string;
+  readonly allowance: number;
+  readonly allowanceReason: string;
+}
+
+/** The exact value where it is known (GOE, GUE), else the limit plus its 1/N correction. */
+export function evenMomentReference(ensemble: EnsembleSpec, size: number, k: number): MomentReference {
+  const exact =
+    ensemble.kind === 'goe' ? exactEvenMomentGOE(size, k) : ensemble.kind === 'gue' ? exactEvenMomentGUE(size, k) : undefined;
+  if (exact !== undefined) {
+    return {
+      value: exact,
+      source:
+        ensemble.kind === 'gue'
+          ? `exact E⟨H^${2 * k}⟩ at N = ${size} by the Harer–Zagier recursion (Harer and Zagier 1986, Invent. Math. 85)`
+          : `exact E⟨H^${2 * k}⟩ at N = ${size}, polynomial in N from exact Wick enumeration (../shared/THEORY.md; recursion in Ledoux 2009, Ann. Inst. H. Poincaré Probab. Stat. 45)`,
+      allowance: 1e-12 * exact,
+      allowanceReason: 'none beyond rounding: the reference is exact at this N',
+    };
+  }
+  const epsilon = expansionParameter(ensemble, size);
+  const c = ensembleConstants(ensemble, size);
+  // κ4 is O(1) for dense entries and about N/d for sparse ones; κ4/(Nε) is O(1) in both cases.
+  const cumulantScale = 1 + Math.abs(c.kappa4) / (size * epsilon) + c.diagonalVariance;
+  const scaleOfRest = (GOE_SECOND_ORDER[k] + GOE_THIRD_ORDER[k] * epsilon) * cumulantScale;
+  return {
+    value: semicircleEvenMoment(k) + evenMomentCorrection(k, c) / size,
+    source: `Catalan(${k}) (Wigner 1955; OEIS A000108) plus the 1/N correction of E Tr f(H) for f = x^${2 * k} (Bai and Yao 2005, Bernoulli 11)`,
+    allowance: 3 * scaleOfRest * epsilon * epsilon,
+    allowanceReason:
+      'the O(ε²) rest of the expansion (ε = 1/N, or max(1/N, 1/d) if sparse), bounded by 3× GOE\'s ε² and ε³ coefficients times (1 + |κ4|/(Nε) + σ_d²) (common practice scale)',
+  };
+}
+
+/** E⟨H^{2k}⟩, k = 1 … 4, from the spectra of K matrices. */
+export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunSettings): CheckGroup {
+  const label = ensembleLabel(ensemble);
+  const id = `semicircle/even-moments/${label}/N=${size}`;
+  const ks = Array.from({ length: MAX_K }, (_, i) => i + 1);
+  return {
+    id,
+    suite: 'semicircle',
+    checks: ks.map((k) => ({
+      id: `${id}/k=${k}`,
+      title: `E⟨H^${2 * k}⟩ against its finite-N value`,
+      parameters: { ensemble: label, N: size, moment: 2 * k, samples: settings.samples },
+    })),
+    skipReason: (capabilities) => nothingToExercise(capabilities, 'eigenvalues'),
+    async run(context): Promise<CheckFinding[]> {
+      const source = await matrixSource(context, id, ensemble, size, settings.samples, false);
+      const sums = new RunningMeans(MAX_K);
+      const row = new Float64Array(MAX_K);
+      for await (const matrix of source.matrices) {
+        const values = await spectrumOf(context, matrix);
+        row.fill(0);
+        for (const lambda of values) {
+          const l2 = lambda * lambda;
+          let power = 1;
+          for (let k = 0; k < MAX_K; k++) {
+            power *= l2;
+            row[k] += power;
+          }
+        }
+        for (let k = 0; k < MAX_K; k++) row[k] /= size;
+        sums.add(row);
+      }
+      const path = pathDescription(source.description, 'eigenvalues', eigenvalueOrigin(context));
+      return ks.map((k) => {
+        const reference = evenMomentReference(ensemble, size, k);
+        return {
+          state: 'measured',
+          path,
+          evidence: toleranceTest({
+            observed: sums.meanOf(k - 1),
+            expected: reference.value,
+            expectedSource: reference.source,
+            standardError: sums.standardErrorOf(k - 1),
+            standardErrorMethod: `sample standard deviation / √K over K = ${sums.count} independent matrices`,
+            allowance: reference.allowance,
+            allowanceReason: reference.allowanceReason,
+            sampleCount: sums.count,
+          }),
+        };
+      });
+    },
+  };
+}
