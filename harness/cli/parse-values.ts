@@ -24,7 +24,7 @@ export function parseSizeList(text: string | number | readonly (string | number)
 
 /** At least three distinct sizes, ascending: a rate fit needs two degrees of freedom and one to spare. */
 export function parseLadder(text: string | number | readonly (string | number)[]): number[] {
-  const sizes = [...new Set(words(text).map((w) => parseWholeNumber('ladder', w, 2, 20000)))].sort((a, b) => a - b);
+  const sizes = [...new Set(words(text).map((w) => parseWholeNumber('ladder', w, 16, 20000)))].sort((a, b) => a - b);
   if (sizes.length < 3) throw new UsageError(`--ladder needs at least three distinct sizes, got '${String(text)}'`);
   return sizes;
 }
