@@ -1,4 +1,5 @@
 import { symmetricTwoByTwo } from './symmetric-two-by-two.js';
+import { forEachUnreducedBlock, reverseBlock } from './tridiagonal-blocks.js';
 import type { SymmetricTridiagonal } from './symmetric-tridiagonal.js';
 
 /**
@@ -30,38 +31,10 @@ export function tridiagonalEigenvalues(t: SymmetricTridiagonal): Float64Array {
   e.set(t.offDiagonal.subarray(0, Math.max(n - 1, 0)));
   const eps = Number.EPSILON / 2;
   const eps2 = eps * eps;
-  const safeMin = 2.2250738585072014e-308;
-  const scaleUpLimit = Math.sqrt(1 / safeMin) / 3;
-  const scaleDownLimit = Math.sqrt(safeMin) / eps2;
   const maxSweeps = 30 * n;
   let sweeps = 0;
-  let l1 = 0;
-  while (l1 < n) {
-    if (l1 > 0) e[l1 - 1] = 0;
-    let m = l1;
-    for (; m < n - 1; m++) {
-      if (Math.abs(e[m]) <= Math.sqrt(Math.abs(d[m])) * Math.sqrt(Math.abs(d[m + 1])) * eps) {
-        e[m] = 0;
-        break;
-      }
-    }
-    let l = l1;
-    const lsv = l;
-    const lend = m;
-    l1 = m + 1;
-    if (lend === l) continue;
-    let anorm = 0;
-    for (let i = l; i <= lend; i++) anorm = Math.max(anorm, Math.abs(d[i]));
-    for (let i = l; i < lend; i++) anorm = Math.max(anorm, Math.abs(e[i]));
-    if (!Number.isFinite(anorm)) throw new RangeError('tridiagonalEigenvalues: non-finite entry in the tridiagonal matrix');
-    if (anorm === 0) continue;
-    let scale = 1;
-    if (anorm > scaleUpLimit) scale = scaleUpLimit / anorm;
-    else if (anorm < scaleDownLimit) scale = scaleDownLimit / anorm;
-    if (scale !== 1) {
-      for (let i = l; i <= lend; i++) d[i] *= scale;
-      for (let i = l; i < lend; i++) e[i] *= scale;
-    }
+  forEachUnreducedBlock(d, e, 'tridiagonalEigenvalues', (start, lend) => {
+    let l = start;
     if (Math.abs(d[lend]) < Math.abs(d[l])) reverseBlock(d, e, l, lend);
     for (let i = l; i < lend; i++) e[i] *= e[i];
     // QL iteration on the block, with e holding squared off-diagonal entries.
@@ -111,21 +84,6 @@ export function tridiagonalEigenvalues(t: SymmetricTridiagonal): Float64Array {
       e[l] = s * p;
       d[l] = sigma + gamma;
     }
-    if (scale !== 1) for (let i = lsv; i <= lend; i++) d[i] /= scale;
-  }
+  });
   return d.sort();
-}
-
-/** Reverses rows and columns l … lend of the tridiagonal (d, e), turning QR into QL. */
-export function reverseBlock(d: Float64Array, e: Float64Array, l: number, lend: number): void {
-  for (let i = l, j = lend; i < j; i++, j--) {
-    const t = d[i];
-    d[i] = d[j];
-    d[j] = t;
-  }
-  for (let i = l, j = lend - 1; i < j; i++, j--) {
-    const t = e[i];
-    e[i] = e[j];
-    e[j] = t;
-  }
 }
