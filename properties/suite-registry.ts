@@ -1,8 +1,12 @@
 import type { PropertySuite } from '../harness/check-group.js';
+import { identitiesSuite } from './identities.js';
 import { semicircleSuite } from './semicircle.js';
 
 /** Every suite by its name on the command line. */
-export const SUITES: ReadonlyMap<string, PropertySuite> = new Map([[semicircleSuite.name, semicircleSuite]]);
+export const SUITES: ReadonlyMap<string, PropertySuite> = new Map([
+  [semicircleSuite.name, semicircleSuite],
+  [identitiesSuite.name, identitiesSuite],
+]);
 
 export function suiteNames(): string[] {
   return [...SUITES.keys()];
