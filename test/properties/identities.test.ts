@@ -4,6 +4,7 @@ import type { CheckVerdict } from '../../harness/verdict.js';
 import { runChecks } from '../../harness/run-checks.js';
 import type { RunSettings } from '../../harness/run-settings.js';
 import { identitiesSuite } from '../../properties/identities.js';
+import { independentAdapter } from '../support/independent-adapter.js';
 import { mutantAdapter, reference } from '../support/mutant-adapter.js';
 import { testSettings } from '../support/run-settings-for-tests.js';
 import { IDENTITIES_MUTANTS } from './mutants/identities-mutants.js';
@@ -50,6 +51,15 @@ describe('identities suite', () => {
       expect(c.evidence.worstInput).toMatch(/^worst of 20 case\(s\): N = \d+, ensemble /);
       expect(c.evidence.ratio).toBeLessThanOrEqual(c.evidence.threshold);
     }
+  });
+
+  it('passes a correct engine built differently (ml-matrix QL, Gaussian elimination): the tolerances are not bit-identity', async () => {
+    const result = await runChecks(independentAdapter, settings(), [identitiesSuite]);
+    const checks = result.suites[0].checks;
+    expect(checks.filter((c) => c.state !== 'pass').map((c) => `${c.id}: ${c.state} ${c.reason ?? ''}`)).toEqual([]);
+    // The agreement checks did compare two different computations.
+    const agreement = checks.filter((c) => c.id.startsWith('identities/agreement/'));
+    expect(agreement.some((c) => c.evidence?.kind === 'deterministic' && c.evidence.ratio > 0)).toBe(true);
   });
 
   for (const mutant of IDENTITIES_MUTANTS) {
