@@ -35,22 +35,23 @@ import { tridiagonaliseReal } from './tridiagonalise-real.js';
  */
 export function eigenvalues(m: SquareMatrix): Float64Array {
   const n = checkedSize(m, 'eigenvalues');
-  const work = Float64Array.from(m.data);
   const tridiagonal =
-    m.field === 'real' ? tridiagonaliseReal(work, n, false).tridiagonal : tridiagonaliseHermitian(work, n, false).tridiagonal;
+    m.field === 'real'
+      ? tridiagonaliseReal(m.data, n, false).tridiagonal
+      : tridiagonaliseHermitian(Float64Array.from(m.data), n, false).tridiagonal;
   return tridiagonalEigenvalues(tridiagonal);
 }
 
 /** Eigenvalues (ascending) and orthonormal eigenvectors; see `eigenvalues` for method and input. */
 export function eigenpairs(m: SquareMatrix): SpectralDecomposition {
   const n = checkedSize(m, 'eigenpairs');
-  const work = Float64Array.from(m.data);
   if (m.field === 'real') {
-    const reduction = tridiagonaliseReal(work, n, true);
-    const rows = n >= 3 ? transposedRealFactor(work, reduction.tau, n) : identity(n, 1);
+    const reduction = tridiagonaliseReal(m.data, n, true);
+    const rows = reduction.reflectors !== null && n >= 3 ? transposedRealFactor(reduction.reflectors, reduction.tau, n) : identity(n, 1);
     const values = tridiagonalEigenpairs(reduction.tridiagonal, rows, n);
     return sortedDecomposition('real', n, values, rows);
   }
+  const work = Float64Array.from(m.data);
   const reduction = tridiagonaliseHermitian(work, n, true);
   const rows = n >= 3 ? transposedUnitaryFactor(work, reduction.tau, n) : identity(n, 2);
   // Row r of (Q D)ᵀ is δ_r times row r of Qᵀ.
