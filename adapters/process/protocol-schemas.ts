@@ -55,10 +55,17 @@ interface CompiledSchemas {
 
 let compiled: CompiledSchemas | undefined;
 
+/** Compiles every schema now (it happens on first use otherwise); throws if one is invalid. */
+export function compileProtocolSchemas(): void {
+  schemas();
+}
+
 function schemas(): CompiledSchemas {
   if (compiled !== undefined) return compiled;
   // verbose: errors carry their schema, whose title names what a failed anyOf/oneOf expected.
-  const ajv = new Ajv({ allErrors: false, verbose: true, strict: true });
+  // strictRequired is off: the oneOf branches of response.json require members that the parent
+  // schema defines, which is correct JSON Schema that ajv's strict mode would reject.
+  const ajv = new Ajv({ allErrors: false, verbose: true, strict: true, strictRequired: false });
   for (const schema of SHARED_SCHEMAS) ajv.addSchema(schema);
   const params = {} as Record<ProtocolMethod, ValidateFunction>;
   const result = {} as Record<ProtocolMethod, ValidateFunction>;
