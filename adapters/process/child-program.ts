@@ -1,5 +1,4 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import type { BoundedTextLog } from './bounded-text-log.js';
 import { LineChannel } from './line-channel.js';
 
 /** How a program ended: an exit code, a signal, or a failure to spawn at all. */
@@ -16,7 +15,7 @@ export interface ChildProgramOptions {
   /** Longest stdout line kept (bytes); a longer one is reported and discarded. */
   readonly maxLineBytes: number;
   /** Receives everything the program writes to stderr. */
-  readonly stderrLog: BoundedTextLog;
+  readonly onStderr: (text: string) => void;
 }
 
 export interface ChildProgramHandlers {
@@ -75,7 +74,7 @@ export class ChildProgram {
       if (exitSeen !== undefined) report(exitSeen);
     });
     this.child.stderr?.setEncoding('utf8');
-    this.child.stderr?.on('data', (text: string) => options.stderrLog.append(text));
+    this.child.stderr?.on('data', (text: string) => options.onStderr(text));
     // A write to a program that has exited fails with EPIPE; the exit itself is what gets reported.
     this.child.stdin?.on('error', () => undefined);
     this.child.stdout?.on('error', () => undefined);

@@ -1,5 +1,5 @@
 import { AdapterFault } from '../adapter.js';
-import type { BoundedTextLog } from './bounded-text-log.js';
+import { BoundedTextLog } from './bounded-text-log.js';
 import { ChildProgram, type ExitInfo } from './child-program.js';
 import { responseEnvelopeProblem } from './protocol-schemas.js';
 
@@ -17,6 +17,8 @@ export interface JsonRpcClientOptions {
   readonly log: BoundedTextLog;
   /** A line of stdout that is not a message (PROTOCOL.md, "Output that is not a message"). */
   readonly onNoise: (line: string) => void;
+  /** Something the report should show that is not a fault of a call (an exit between calls). */
+  readonly onNote: (text: string) => void;
 }
 
 interface Pending {
@@ -26,7 +28,7 @@ interface Pending {
   readonly timeoutMs: number;
   readonly noise: string[];
   resolve(outcome: RpcOutcome): void;
-  reject(fault: AdapterFault): void;
+  reject(error: Error): void;
 }
 
 const EXCERPT_CHARS = 160;
@@ -44,6 +46,8 @@ const STDERR_TAIL_CHARS = 600;
  */
 export class JsonRpcClient {
   private readonly program: ChildProgram;
+  /** This program's own stderr, for fault messages (the shared log also holds older programs'). */
+  private readonly stderrTail = new BoundedTextLog(STDERR_TAIL_CHARS);
   private nextId = 1;
   private pending: Pending | undefined;
   private broken: string | undefined;
@@ -52,7 +56,15 @@ export class JsonRpcClient {
   constructor(command: string, private readonly options: JsonRpcClientOptions) {
     this.program = ChildProgram.spawn(
       command,
-      { cwd: options.cwd, env: options.env, maxLineBytes: options.maxResponseBytes, stderrLog: options.log },
+      {
+        cwd: options.cwd,
+        env: options.env,
+        maxLineBytes: options.maxResponseBytes,
+        onStderr: (text) => {
+          options.log.append(text);
+          this.stderrTail.append(text);
+        },
+      },
       {
         onLine: (line) => this.onLine(line),
         onOversizeLine: (bytes) => this.onOversize(bytes),
@@ -91,7 +103,18 @@ export class JsonRpcClient {
     return this.stopping;
   }
 
+  /** A failure of our own while reading a line fails the pending call instead of escaping. */
   private onLine(line: string): void {
+    try {
+      this.readLine(line);
+    } catch (error) {
+      const pending = this.pending;
+      this.breakDown(`internal error while reading a response: ${(error as Error).message}`);
+      pending?.reject(error as Error);
+    }
+  }
+
+  private readLine(line: string): void {
     const text = line.trim();
     if (text === '') return;
     if (!text.startsWith('{')) {
@@ -106,7 +129,7 @@ export class JsonRpcClient {
     }
     let message: unknown;
     try {
-      message = JSON.parse(text);
+      message = JSON.parse(text, overflowAsWireInfinity);
     } catch (error) {
       const hint = /\b(NaN|Infinity)\b/.test(text)
         ? ' (JSON has no NaN or Infinity: send them as the strings "NaN", "Infinity", "-Infinity")'
@@ -148,12 +171,13 @@ export class JsonRpcClient {
 
   private onExit(info: ExitInfo): void {
     const ending = describeExit(info);
-    const stderr = this.options.log.tail(STDERR_TAIL_CHARS).trim();
+    const stderr = this.stderrTail.tail(STDERR_TAIL_CHARS).trim().replace(/\s*\n\s*/g, ' | ');
     const detail = stderr === '' ? '' : `; its stderr ends: ${stderr}`;
     if (this.pending !== undefined) {
       this.fail('crashed', `the program ${ending} while computing ${this.pending.method}${detail}`);
-    } else {
-      this.broken ??= `the program ${ending}${detail}`;
+    } else if (this.broken === undefined) {
+      this.broken = `the program ${ending}${detail}`;
+      this.options.onNote(`the program ${ending} between calls${detail}`);
     }
   }
 
@@ -176,6 +200,16 @@ export class JsonRpcClient {
   }
 }
 
+/**
+ * JSON.parse reads a literal beyond the float64 range (1e999) as ±Infinity, which ajv's "number"
+ * rejects; turning it into the wire's "Infinity" string lets the adapter report it as the invalid
+ * value it is rather than as a malformed response.
+ */
+function overflowAsWireInfinity(_key: string, value: unknown): unknown {
+  if (typeof value === 'number' && !Number.isFinite(value)) return value > 0 ? 'Infinity' : '-Infinity';
+  return value;
+}
+
 function describeExit(info: ExitInfo): string {
   if (info.spawnError !== undefined) return `could not be started (${info.spawnError})`;
   if (info.signal !== null) return `was killed by ${info.signal}`;
@@ -185,5 +219,5 @@ function describeExit(info: ExitInfo): string {
 
 function excerpt(text: string): string {
   const flat = text.replace(/\s+/g, ' ');
-  return JSON.stringify(flat.length <= EXCERPT_CHARS ? flat : `${flat.slice(0, EXCERPT_CHARS)}…`);
+  return `'${flat.length <= EXCERPT_CHARS ? flat : `${flat.slice(0, EXCERPT_CHARS)}…`}'`;
 }

@@ -14,7 +14,7 @@ import { JsonRpcClient, type RpcOutcome } from './json-rpc-client.js';
 import { decodeMatrix, type WireMatrix } from './matrix-codec.js';
 import { resolveProcessAdapterOptions, type ProcessAdapterOptions, type ResolvedProcessAdapterOptions } from './process-adapter-options.js';
 import { PROTOCOL_ERROR_CODES } from './protocol-error-codes.js';
-import { resultProblem, type ProtocolMethod } from './protocol-schemas.js';
+import { compileProtocolSchemas, resultProblem, type ProtocolMethod } from './protocol-schemas.js';
 import { requestParams } from './request-params.js';
 import { resultChecks } from './result-checks.js';
 import { complexFromWire, realFromWire, type WireComplex, type WireReal } from './wire-numbers.js';
@@ -53,6 +53,7 @@ export class ProcessAdapter implements Adapter {
    * (method 'describe') when the program does not start or does not answer describe properly.
    */
   static async start(command: string, options?: ProcessAdapterOptions): Promise<ProcessAdapter> {
+    compileProtocolSchemas();
     const adapter = new ProcessAdapter(command, resolveProcessAdapterOptions(options));
     try {
       await adapter.enqueue(() => adapter.liveClient('describe'));
@@ -186,6 +187,7 @@ export class ProcessAdapter implements Adapter {
       maxResponseBytes: this.options.maxResponseBytes,
       killGraceMs: this.options.killGraceMs,
       log: this.stderrAndNotes,
+      onNote: (text) => this.note(text),
       onNoise: (line) => this.note(`stdout line that is not a message, ignored: ${JSON.stringify(line.length > 200 ? `${line.slice(0, 200)}…` : line)}`),
     });
     this.client = client;
