@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import type { CheckContext } from '../../harness/check-group.js';
+import type { DeterministicEvidence } from '../../harness/evidence.js';
 import { eigenvalues } from '../../harness/numeric/eigen.js';
 import { entryRe, frobeniusNorm, type SquareMatrix } from '../../harness/numeric/square-matrix.js';
 import type { RunSettings } from '../../harness/run-settings.js';
@@ -9,7 +10,6 @@ import { EPSILON, eigenvalueErrorScale, RATIO_THRESHOLD, referenceSpectrum, type
 import { inequalityEvidence } from './inequality-evidence.js';
 import { caseMatrix, describeMatrixCase, matrixCaseArbitrary, type MatrixCase } from './matrix-case.js';
 import type { RandomisedIdentity } from './randomised-identity-check.js';
-import type { DeterministicEvidence } from '../../harness/evidence.js';
 
 type EigenCase = { readonly matrix: MatrixCase };
 
@@ -65,11 +65,13 @@ export function eigenvalueOrder(settings: RunSettings): RandomisedIdentity<Eigen
         at = i;
       }
     }
+    // With fewer than two values there is no order to check (the count check says what is wrong).
+    const pair = values.length > 1;
     return inequalityEvidence({
-      observed: values.length > 1 ? values[at + 1] : NaN,
-      bound: values.length > 1 ? values[at] : NaN,
+      observed: pair ? values[at + 1] : values.length,
+      bound: pair ? values[at] : values.length,
       boundSource: `λ_${at + 1} ≥ λ_${at}: eigenvalues are returned ascending (the adapter contract, adapters/adapter.ts)`,
-      violation: values.length > 1 ? descent : 0,
+      violation: pair ? descent : 0,
       scale: eigenvalueErrorScale(spectrum),
       toleranceReason: 'largest descent max_i (λ_i − λ_{i+1})₊ / (Nε‖H‖₂): a sorted output has none',
     });

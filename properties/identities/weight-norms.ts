@@ -7,8 +7,9 @@ import { entryIm, entryRe, frobeniusNorm, type SquareMatrix } from '../../harnes
 
 /**
  * An upper bound on the operator norm: ‖A‖₂ ≤ √(‖A‖₁‖A‖∞), the geometric mean of the largest
- * column and row sums of |a_ij| (Higham 2002, Accuracy and Stability of Numerical Algorithms, 2nd
- * ed., SIAM, Table 6.2 and §6.3; from memory). Exact for diagonal matrices and for the identity.
+ * column and row sums of |a_ij| (Golub and Van Loan 2013, Matrix Computations, 4th ed., §2.3.3;
+ * Higham 2002, Accuracy and Stability of Numerical Algorithms, 2nd ed., SIAM, §6.3; section
+ * numbers from memory). Exact for diagonal matrices and for the identity.
  */
 export function operatorNormBound(a: SquareMatrix): number {
   const n = a.size;
