@@ -65,19 +65,17 @@ export async function runChecks(
 ): Promise<RunResult> {
   const description = await adapter.describe();
   const context = contextFor(adapter, description, settings);
+  // A group runs whole (its checks share samples); with --only, the findings of the checks not
+  // asked for are dropped afterwards, never the group's own pairing of checks and findings.
   const only = new Set(settings.only);
-  const groups = suites.flatMap((suite) =>
-    suite
-      .plan(settings)
-      .map((g) => (only.size === 0 ? g : { ...g, checks: g.checks.filter((c) => only.has(c.id)), run: g.run, skipReason: g.skipReason }))
-      .filter((g) => g.checks.length > 0),
-  );
-  const total = groups.reduce((n, g) => n + g.checks.length, 0);
+  const wanted = (id: string) => only.size === 0 || only.has(id);
+  const groups = suites.flatMap((suite) => suite.plan(settings)).filter((g) => g.checks.some((c) => wanted(c.id)));
+  const total = groups.reduce((n, g) => n + g.checks.filter((c) => wanted(c.id)).length, 0);
   progress.onRunStart?.({ adapter: description, totalChecks: total });
   const outcomes: RawOutcome[] = [];
   for (const group of groups) {
-    const all = await runGroup(group, context);
-    for (const outcome of all) {
+    for (const outcome of await runGroup(group, context)) {
+      if (!wanted(outcome.id)) continue;
       outcomes.push(outcome);
       progress.onCheckFinished?.(outcome, outcomes.length, total);
     }

@@ -11,7 +11,7 @@ const packageRoot = join(dirname(fileURLToPath(import.meta.url)), '..', '..', '.
 const cli = join(packageRoot, 'dist', 'harness', 'cli', 'main.js');
 const kernelFolder = join(packageRoot, 'examples', 'demo', 'lab-kernel');
 
-const common = ['--suite', 'semicircle', '--ensemble', 'goe', '--size', '100', '--ladder', '50,100,200', '--samples', '150', '--seed', '7'];
+const common = ['--suite', 'semicircle,identities', '--ensemble', 'goe', '--size', '100', '--ladder', '50,100,200', '--samples', '150', '--seed', '7'];
 
 function check(release: string): number {
   const module = relative(process.cwd(), join(kernelFolder, `spectral-kernel-${release}.mjs`));

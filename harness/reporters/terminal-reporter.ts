@@ -16,23 +16,33 @@ function painter(interactive: boolean) {
   return (colour: keyof typeof colours, text: string) => (interactive ? `\u001b[${colours[colour]}m${text}\u001b[0m` : text);
 }
 
-function describeEvidence(v: CheckVerdict): string[] {
+/**
+ * The evidence of a failed check. Sources and methods shared with an earlier failure in the same
+ * summary are printed once and then referred to, so a run with many failures stays readable.
+ */
+function describeEvidence(v: CheckVerdict, seen: Set<string>): string[] {
+  const once = (text: string) => {
+    if (seen.has(text)) return 'as above';
+    seen.add(text);
+    return text;
+  };
   const e = v.evidence;
   if (e === undefined) return [];
   if (e.kind === 'statistical') {
     return [
       `  observed   ${shortQuantity(e.observed, 8)}`,
       `  expected   ${shortQuantity(e.expected, 8)}`,
-      `             ${e.expectedSource}`,
-      `  error bar  ±${shortQuantity(e.standardError, 3)} (${e.standardErrorMethod})`,
-      `  allowance  ${shortNumber(e.allowance)} (${e.allowanceReason})`,
+      `  source     ${once(e.expectedSource)}`,
+      `  error bar  ±${shortQuantity(e.standardError, 3)} (${once(e.standardErrorMethod)})`,
+      `  allowance  ${shortNumber(e.allowance)} (${once(e.allowanceReason)})`,
       `  excess     ${shortNumber(e.zScore)} standard errors beyond the allowance; p = ${shortNumber(e.pValue)}, Holm-adjusted ${shortNumber(v.adjustedPValue ?? NaN)}`,
     ];
   }
   return [
     `  observed   ${shortQuantity(e.observed, 12)}`,
-    `  expected   ${shortQuantity(e.expected, 12)}  (${e.expectedSource})`,
-    `  ratio      ${shortNumber(e.ratio)} against threshold ${e.threshold} (${e.toleranceReason})`,
+    `  expected   ${shortQuantity(e.expected, 12)}`,
+    `  source     ${once(e.expectedSource)}`,
+    `  ratio      ${shortNumber(e.ratio)} against threshold ${e.threshold} (${once(e.toleranceReason)})`,
     ...(e.worstInput ? [`  input      ${e.worstInput}`] : []),
   ];
 }
@@ -42,8 +52,9 @@ export function formatTerminalSummary(result: RunResult, style: TerminalStyle): 
   const paint = painter(style.interactive);
   const all = result.suites.flatMap((s) => s.checks);
   const lines: string[] = [''];
+  const seen = new Set<string>();
   for (const v of all.filter((c) => c.state === 'fail')) {
-    lines.push(`${paint('red', 'FAILED ')} ${v.id}`, `  ${v.title}`, ...describeEvidence(v));
+    lines.push(`${paint('red', 'FAILED ')} ${v.id}`, `  ${v.title}`, ...describeEvidence(v, seen));
     if (v.path) lines.push(`  path       ${v.path}`);
     lines.push(`  replay     ${v.replay}`, '');
   }

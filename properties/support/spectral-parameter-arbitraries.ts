@@ -20,9 +20,15 @@ const ENERGY_RANGE: Record<SpectralRegion, [number, number]> = {
 
 const SMALLEST_ETA_EXPONENT: Record<SpectralRegion, number> = { bulk: 0.5, edge: 1 / 3, outside: 0.5 };
 
-/** Rounded to 4 decimals, so a check's id names z exactly and a replay draws the same point. */
-function round4(x: number): number {
-  return Math.round(x * 1e4) / 1e4;
+/** Points on a grid of 10⁻⁴, so a check's id names z exactly and a replay draws the same point. */
+const GRID = 1e4;
+
+/**
+ * A number drawn uniformly from [min, max] on the grid. fast-check's double arbitrary spreads over
+ * the bit patterns of doubles, favouring tiny magnitudes; an integer grid is uniform.
+ */
+function onGrid(min: number, max: number): fc.Arbitrary<number> {
+  return fc.integer({ min: Math.ceil(min * GRID), max: Math.floor(max * GRID) }).map((k) => k / GRID);
 }
 
 export function spectralParameterArbitrary(region: SpectralRegion, size: number): fc.Arbitrary<Complex> {
@@ -30,14 +36,15 @@ export function spectralParameterArbitrary(region: SpectralRegion, size: number)
   const logEtaMin = -SMALLEST_ETA_EXPONENT[region] * Math.log(size);
   return fc
     .record({
-      energy: fc.double({ min: eMin, max: eMax, noNaN: true }),
-      energySign: fc.boolean(),
-      logEta: fc.double({ min: logEtaMin, max: 0, noNaN: true }),
+      energy: onGrid(eMin, eMax),
+      negativeEnergy: fc.boolean(),
+      logEta: onGrid(logEtaMin, 0),
       lowerHalfPlane: fc.boolean(),
     })
-    .map(({ energy, energySign, logEta, lowerHalfPlane }) => {
-      const eta = Math.max(round4(Math.exp(logEta)), 1e-4);
-      return { re: round4(energySign ? -energy : energy), im: lowerHalfPlane ? -eta : eta };
+    .map(({ energy, negativeEnergy, logEta, lowerHalfPlane }) => {
+      const eta = Math.max(Math.round(Math.exp(logEta) * GRID) / GRID, 1 / GRID);
+      // 0 − 0 would be −0: keep the energy's sign only where it has one.
+      return { re: negativeEnergy && energy !== 0 ? -energy : energy, im: lowerHalfPlane ? -eta : eta };
     });
 }
 

@@ -37,3 +37,16 @@ describe('semicircle suite', () => {
     expect(checks[0].reason).toMatch(/neither a sampler nor/);
   });
 });
+
+describe('semicircle suite replay', () => {
+  it('re-runs exactly one check of a shared-sample group with --only, with the same result', async () => {
+    const settings = testSettings({ sizes: [60], samples: 60 });
+    const full = await runChecks(reference, settings, [semicircleSuite]);
+    const third = full.suites[0].checks.filter((c) => c.id.includes('stieltjes-mean'))[2];
+    const replay = await runChecks(reference, { ...settings, only: [third.id] }, [semicircleSuite]);
+    const [again] = replay.suites[0].checks;
+    expect(replay.suites[0].checks).toHaveLength(1);
+    expect(again.id).toBe(third.id);
+    expect(again.evidence).toEqual(third.evidence);
+  });
+});

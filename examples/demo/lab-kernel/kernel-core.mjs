@@ -36,11 +36,34 @@ function sampleGoe(size, next) {
   return { size, field: 'real', data };
 }
 
-function spectrum(matrix) {
+function decompose(matrix) {
   if (matrix.field !== 'real') throw new Error('this kernel handles real symmetric matrices only');
   const rows = Array.from({ length: matrix.size }, (_, i) => Array.from(matrix.data.subarray(i * matrix.size, (i + 1) * matrix.size)));
-  const values = new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true }).realEigenvalues;
-  return Float64Array.from(values).sort();
+  return new EigenvalueDecomposition(new Matrix(rows), { assumeSymmetric: true });
+}
+
+function spectrum(matrix) {
+  return Float64Array.from(decompose(matrix).realEigenvalues).sort();
+}
+
+// (vᵢᵀ A vᵢ) for each eigenvector vᵢ, as [re, im]; A real or complex (interleaved).
+function eigenbasisDiagonal(vectors, weight) {
+  const n = weight.size;
+  const stride = weight.field === 'complex' ? 2 : 1;
+  return Array.from({ length: n }, (_, i) => {
+    const v = vectors.getColumn(i);
+    let re = 0;
+    let im = 0;
+    for (let j = 0; j < n; j++) {
+      for (let k = 0; k < n; k++) {
+        const w = v[j] * v[k];
+        const at = (j * n + k) * stride;
+        re += w * weight.data[at];
+        if (stride === 2) im += w * weight.data[at + 1];
+      }
+    }
+    return [re, im];
+  });
 }
 
 /**
@@ -53,18 +76,21 @@ export function makeKernel({ name, version, traceDenominator }) {
     version,
     eigenvalues: spectrum,
     resolventTrace(matrix, points, weight) {
-      if (weight !== undefined) throw new Error('weighted traces are not implemented in this kernel');
-      const values = spectrum(matrix);
+      const decomposition = decompose(matrix);
+      const values = decomposition.realEigenvalues;
+      const diagonal = weight === undefined ? values.map(() => [1, 0]) : eigenbasisDiagonal(decomposition.eigenvectorMatrix, weight);
       const denominator = traceDenominator(matrix.size);
       return points.map(([re, im]) => {
         let sumRe = 0;
         let sumIm = 0;
-        for (const lambda of values) {
+        values.forEach((lambda, i) => {
+          // a/(λ − z) with a = diagonal[i]: multiply by conj(λ − z) = (λ − re) + i·im.
           const dr = lambda - re;
           const d = dr * dr + im * im;
-          sumRe += dr / d;
-          sumIm += im / d;
-        }
+          const [ar, ai] = diagonal[i];
+          sumRe += (ar * dr - ai * im) / d;
+          sumIm += (ar * im + ai * dr) / d;
+        });
         return [sumRe / denominator, sumIm / denominator];
       });
     },
