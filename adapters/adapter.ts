@@ -65,8 +65,17 @@ export class AdapterFault extends Error {
   }
 }
 
+/**
+ * The implementation cannot answer this particular request (an ensemble it does not sample, a case
+ * it does not cover, a value a recording does not hold): the checks that need it are skipped, with
+ * the message as the reason. Not a fault.
+ */
+export class NotAvailable extends Error {
+  override readonly name: string = 'NotAvailable';
+}
+
 /** The implementation does not offer this ensemble; checks that need it are skipped. */
-export class EnsembleNotOffered extends Error {
+export class EnsembleNotOffered extends NotAvailable {
   override readonly name = 'EnsembleNotOffered';
   constructor(readonly ensemble: string) {
     super(`the implementation does not sample the ensemble ${ensemble}`);

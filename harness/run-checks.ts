@@ -1,4 +1,4 @@
-import { AdapterFault, EnsembleNotOffered, type Adapter, type AdapterDescription } from '../adapters/adapter.js';
+import { AdapterFault, NotAvailable, type Adapter, type AdapterDescription } from '../adapters/adapter.js';
 import type { CheckContext, CheckGroup, PropertySuite } from './check-group.js';
 import { decideVerdicts, type RawOutcome } from './decide-verdicts.js';
 import { ensembleLabel } from './numeric/ensemble.js';
@@ -41,7 +41,7 @@ async function runGroup(group: CheckGroup, context: CheckContext): Promise<RawOu
       return { ...c, ...finding, ...(replayCase ? { replay: replayCommand(context.settings, group.suite, c.id, replayCase) } : {}) };
     });
   } catch (error) {
-    if (error instanceof EnsembleNotOffered) {
+    if (error instanceof NotAvailable) {
       return checks.map((c) => ({ ...c, state: 'skipped', reason: error.message }));
     }
     const fault =
