@@ -2,6 +2,7 @@ import {
   ALL_CAPABILITIES,
   AdapterFault,
   EnsembleNotOffered,
+  NotAvailable,
   type Adapter,
   type AdapterDescription,
   type Capability,
@@ -142,8 +143,14 @@ export class ProcessAdapter implements Adapter {
     return this.checkedResult(method, await this.request(method, params));
   }
 
-  /** A result that passed its schema; a JSON-RPC error becomes an 'implementation-error' fault. */
+  /**
+   * A result that passed its schema. A JSON-RPC error becomes NotAvailable (code 1002: the checks
+   * that need it are skipped) or else an 'implementation-error' fault.
+   */
   private checkedResult(method: ProtocolMethod, outcome: RpcOutcome): unknown {
+    if (outcome.kind === 'error' && outcome.code === PROTOCOL_ERROR_CODES.notAvailable) {
+      throw new NotAvailable(`${method}: the implementation cannot answer this request: ${outcome.message}`);
+    }
     if (outcome.kind === 'error') {
       throw new AdapterFault(method, 'implementation-error', `${method}: the implementation answered error ${outcome.code}: ${outcome.message}`);
     }

@@ -12,6 +12,7 @@
 //   chainTrace(H, points, weights)          -> complex: Tr(G(z1)A1 ⋯ G(zk)Ak)/N
 //   sample(ensemble, size, seed, count)     -> count matrices; throw new EnsembleNotOffered(ensemble)
 //                                              for an ensemble you do not sample
+// Any of them may throw new NotAvailable('why') for a request it cannot answer: those checks are skipped.
 import { createInterface } from 'node:readline';
 
 // JSON-RPC 2.0 error codes (JSON-RPC 2.0 Specification, 2010, §5.1) and the protocol's own.
@@ -22,6 +23,7 @@ export const ERROR_CODES = {
   invalidParams: -32602,
   computationFailed: -32000,
   ensembleNotOffered: 1001,
+  notAvailable: 1002,
 };
 
 export class EnsembleNotOffered extends Error {
@@ -29,6 +31,9 @@ export class EnsembleNotOffered extends Error {
     super(`ensemble not offered: ${JSON.stringify(ensemble)}`);
   }
 }
+
+/** Throw from any function for a request you cannot answer: rmt-assay skips the checks that need it. */
+export class NotAvailable extends Error {}
 
 class ProtocolError extends Error {
   constructor(code, message) {
@@ -124,7 +129,11 @@ export function serve({ name, version, ...functions }) {
     try {
       send({ jsonrpc: '2.0', id, result: answer(request) });
     } catch (error) {
-      const code = error instanceof EnsembleNotOffered ? ERROR_CODES.ensembleNotOffered : error instanceof ProtocolError ? error.code : ERROR_CODES.computationFailed;
+      const code =
+        error instanceof EnsembleNotOffered ? ERROR_CODES.ensembleNotOffered
+        : error instanceof NotAvailable ? ERROR_CODES.notAvailable
+        : error instanceof ProtocolError ? error.code
+        : ERROR_CODES.computationFailed;
       if (code === ERROR_CODES.computationFailed) console.error(error);
       send({ jsonrpc: '2.0', id, error: { code, message: `${error.message}` } });
     }

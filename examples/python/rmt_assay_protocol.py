@@ -20,6 +20,8 @@ The functions you may pass (each optional; the ones you pass are announced as ca
     sample(ensemble, size, seed, count)  -> count N×N matrices; raise EnsembleNotOffered(ensemble)
                                             for an ensemble you do not sample
 
+Any of them may raise NotAvailable("why") for a request it cannot answer: those checks are skipped.
+
 Matrices arrive as numpy arrays (float64 or complex128) when numpy is installed, otherwise as lists
 of rows of float or complex. Results may be numpy arrays, lists, or Python numbers. Standard library
 only (json, base64, struct, sys); numpy is used when present.
@@ -49,6 +51,7 @@ METHOD_NOT_FOUND = -32601
 INVALID_PARAMS = -32602
 COMPUTATION_FAILED = -32000
 ENSEMBLE_NOT_OFFERED = 1001
+NOT_AVAILABLE = 1002
 
 
 class EnsembleNotOffered(Exception):
@@ -56,6 +59,11 @@ class EnsembleNotOffered(Exception):
 
     def __init__(self, ensemble):
         super().__init__("ensemble not offered: %s" % json.dumps(ensemble, sort_keys=True))
+
+
+class NotAvailable(Exception):
+    """Raise from any function for a request you cannot answer (say, complex matrices in a real-only
+    code): rmt-assay skips the checks that need it, with your message as the reason."""
 
 
 class _ProtocolError(Exception):
@@ -185,7 +193,7 @@ def _answer(table, describe, request):
         raise _ProtocolError(INVALID_PARAMS, "%s needs params as an object" % method)
     try:
         return table[method](params)
-    except (_ProtocolError, EnsembleNotOffered):
+    except (_ProtocolError, EnsembleNotOffered, NotAvailable):
         raise
     except KeyError as error:
         raise _ProtocolError(INVALID_PARAMS, "%s: missing parameter %s" % (method, error))
@@ -218,6 +226,8 @@ def serve(name, version, eigenvalues=None, resolvent_trace=None, chain_trace=Non
             send({"jsonrpc": "2.0", "id": request_id, "result": _answer(table, describe, request)})
         except EnsembleNotOffered as error:
             send({"jsonrpc": "2.0", "id": request_id, "error": {"code": ENSEMBLE_NOT_OFFERED, "message": str(error)}})
+        except NotAvailable as error:
+            send({"jsonrpc": "2.0", "id": request_id, "error": {"code": NOT_AVAILABLE, "message": str(error)}})
         except _ProtocolError as error:
             send({"jsonrpc": "2.0", "id": request_id, "error": {"code": error.code, "message": str(error)}})
         except Exception as error:  # the user's computation failed: report it, keep serving

@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { EnsembleNotOffered } from '../../../adapters/adapter.js';
+import { EnsembleNotOffered, NotAvailable } from '../../../adapters/adapter.js';
 import { ProcessAdapter } from '../../../adapters/process/process-adapter.js';
 import type { ProcessAdapterOptions } from '../../../adapters/process/process-adapter-options.js';
 import { eventually, expectFault, expectTridiagonalSpectrum, FAST, kernelCommand, tridiagonal } from './process-test-support.js';
@@ -148,6 +148,14 @@ describe('ProcessAdapter: faults in a well-framed response (the program keeps ru
   it('passes a JSON-RPC error on as an implementation error with its message', async () => {
     const adapter = await start('error');
     await expectFault(adapter.eigenvalues(tridiagonal(3)), 'eigenvalues', 'implementation-error', /answered error -32000: LinAlgError: Singular matrix/);
+    await expectRecovers(adapter);
+  });
+
+  it('turns error 1002 into NotAvailable, so that the checks are skipped rather than faulted', async () => {
+    const adapter = await start('not-available');
+    const error = await adapter.eigenvalues(tridiagonal(3)).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(NotAvailable);
+    expect((error as Error).message).toBe('eigenvalues: the implementation cannot answer this request: odd sizes are not supported');
     await expectRecovers(adapter);
   });
 
