@@ -13,6 +13,8 @@ import { UsageError } from './usage-error.js';
 /** The `check` command's arguments as yargs hands them over. */
 export interface CheckArguments {
   readonly module?: string;
+  readonly exec?: string;
+  readonly timeout: number;
   readonly suite: string;
   readonly size: string | number;
   readonly ladder: string | number;
@@ -50,7 +52,8 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
   if (args.module !== undefined && args.module.trim() === '') throw new UsageError('--module needs a file');
   // Validate everything before starting an implementation.
   resolveSettings(args, '');
-  const opened = await openAdapter({ module: args.module });
+  if (!(args.timeout > 0) || !Number.isFinite(args.timeout)) throw new UsageError(`--timeout must be a positive number of seconds, got '${args.timeout}'`);
+  const opened = await openAdapter({ module: args.module, exec: args.exec, timeoutSeconds: args.timeout });
   try {
     const settings = resolveSettings(args, opened.arguments);
     const interactive = out.isTTY === true && process.env.CI !== 'true';

@@ -1,4 +1,5 @@
-import type { Adapter } from '../../adapters/adapter.js';
+import { AdapterFault, type Adapter } from '../../adapters/adapter.js';
+import { ProcessAdapter } from '../../adapters/process/process-adapter.js';
 import { ModuleAdapter, ModuleLoadError } from '../../adapters/module-adapter.js';
 import { ReferenceAdapter } from '../../adapters/reference-adapter.js';
 import { shellQuote } from '../replay-command.js';
@@ -6,6 +7,9 @@ import { UsageError } from './usage-error.js';
 
 export interface AdapterChoice {
   readonly module?: string;
+  readonly exec?: string;
+  /** Seconds to wait for one answer of an --exec program. */
+  readonly timeoutSeconds: number;
 }
 
 export interface OpenedAdapter {
@@ -15,8 +19,20 @@ export interface OpenedAdapter {
   readonly log: () => string;
 }
 
-/** The adapter the options name: a module, or the built-in reference engine by default. */
+/** The adapter the options name: a module, a program, or the built-in reference engine by default. */
 export async function openAdapter(choice: AdapterChoice): Promise<OpenedAdapter> {
+  const chosen = [choice.module, choice.exec].filter((c) => c !== undefined);
+  if (chosen.length > 1) throw new UsageError('name one implementation: --module or --exec, not both');
+  if (choice.exec !== undefined) {
+    if (choice.exec.trim() === '') throw new UsageError('--exec needs a command');
+    try {
+      const adapter = await ProcessAdapter.start(choice.exec, { timeoutMs: choice.timeoutSeconds * 1000 });
+      return { adapter, arguments: `--exec ${shellQuote(choice.exec)}`, log: () => adapter.log() };
+    } catch (error) {
+      if (error instanceof AdapterFault) throw new UsageError(`the program '${choice.exec}' cannot run: ${error.message}`);
+      throw error;
+    }
+  }
   if (choice.module !== undefined) {
     try {
       const adapter = await ModuleAdapter.load(choice.module);

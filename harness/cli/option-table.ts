@@ -18,6 +18,17 @@ export const CHECK_OPTIONS = {
     describe: 'check a JavaScript module exporting eigenvalues / resolventTrace / chainTrace / sample',
     group: 'Adapter',
   },
+  exec: {
+    type: 'string',
+    describe: 'check a program that speaks the JSON-RPC protocol on stdin/stdout (a shell command, e.g. "python3 kernel.py")',
+    group: 'Adapter',
+  },
+  timeout: {
+    type: 'number',
+    describe: 'seconds to wait for one answer from an --exec program before it counts as hung',
+    default: 60,
+    group: 'Adapter',
+  },
   suite: { type: 'string', describe: 'suites to run, comma-separated', default: 'semicircle', group: 'Run' },
   size: { type: 'string', describe: 'matrix sizes N, comma-separated', default: DEFAULT_SIZES.join(','), group: 'Run' },
   ladder: {
