@@ -26,10 +26,10 @@ export interface ChildProgramHandlers {
 }
 
 /**
- * Once the program has exited, how long to wait for stdout to reach its end before reporting the
- * exit (a helper process may hold the pipe open; its last line is normally already in flight).
+ * Once the program has exited, how long to wait for its pipes to reach their end before reporting
+ * the exit (a helper process may hold a pipe open; the last output is normally already in flight).
  */
-const STDOUT_DRAIN_MS = 250;
+const PIPE_DRAIN_MS = 250;
 
 /**
  * A user's program started from a command line through the shell (`sh -c COMMAND`), with stdin,
@@ -57,7 +57,9 @@ export class ChildProgram {
       onLine: (line) => handlers.onLine(line),
       onOversize: (bytes) => handlers.onOversizeLine(bytes),
     });
-    let stdoutEnded = false;
+    // The exit is reported once both output pipes have ended (so the last line and the last words
+    // on stderr are in), or PIPE_DRAIN_MS after the exit if a helper keeps a pipe open.
+    let openPipes = 2;
     let exitSeen: ExitInfo | undefined;
     let resolveExited!: (info: ExitInfo) => void;
     this.exited = new Promise((resolve) => (resolveExited = resolve));
@@ -67,12 +69,16 @@ export class ChildProgram {
       handlers.onExit(info);
       resolveExited(info);
     };
+    const pipeEnded = (): void => {
+      openPipes--;
+      if (openPipes === 0 && exitSeen !== undefined) report(exitSeen);
+    };
     this.child.stdout?.on('data', (chunk: Buffer) => lines.feed(chunk));
     this.child.stdout?.on('end', () => {
-      stdoutEnded = true;
       lines.end();
-      if (exitSeen !== undefined) report(exitSeen);
+      pipeEnded();
     });
+    this.child.stderr?.on('end', pipeEnded);
     this.child.stderr?.setEncoding('utf8');
     this.child.stderr?.on('data', (text: string) => options.onStderr(text));
     // A write to a program that has exited fails with EPIPE; the exit itself is what gets reported.
@@ -85,8 +91,8 @@ export class ChildProgram {
     });
     this.child.on('exit', (code, signal) => {
       exitSeen = { code, signal };
-      if (stdoutEnded) report(exitSeen);
-      else setTimeout(() => report(exitSeen as ExitInfo), STDOUT_DRAIN_MS).unref();
+      if (openPipes === 0) report(exitSeen);
+      else setTimeout(() => report(exitSeen as ExitInfo), PIPE_DRAIN_MS).unref();
     });
   }
 
