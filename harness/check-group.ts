@@ -1,5 +1,6 @@
 import type { Adapter, Capability } from '../adapters/adapter.js';
 import type { Evidence } from './evidence.js';
+import type { Exhibit } from './exhibit.js';
 import type { RandomStream } from './numeric/random-stream.js';
 import type { RunSettings } from './run-settings.js';
 
@@ -20,6 +21,8 @@ export type CheckFinding =
       readonly path: string;
       /** For a randomised check that failed: fast-check's path of the shrunk case, for `--case`. */
       readonly replayCase?: string;
+      /** Data for a picture of what was measured. */
+      readonly exhibit?: Exhibit;
     }
   | { readonly state: 'skipped'; readonly reason: string };
 

@@ -1,6 +1,7 @@
 import { holmAdjust } from './estimators/holm-adjust.js';
 import type { CheckFinding, PlannedCheck } from './check-group.js';
 import type { CheckVerdict } from './verdict.js';
+import type { Exhibit } from './exhibit.js';
 
 /** A finding before the run's family-wise control has been applied. */
 export type RawOutcome = PlannedCheck & {
@@ -38,11 +39,15 @@ export function decideVerdicts(outcomes: readonly RawOutcome[], alpha: number): 
       case 'measured': {
         if (o.evidence.kind === 'statistical') {
           const p = adjustedByIndex.get(i) ?? NaN;
-          return { ...base, state: p > alpha ? 'pass' : 'fail', evidence: o.evidence, adjustedPValue: p, path: o.path };
+          return { ...base, state: p > alpha ? 'pass' : 'fail', evidence: o.evidence, adjustedPValue: p, path: o.path, ...exhibitOf(o) };
         }
         const ok = o.evidence.ratio <= o.evidence.threshold;
-        return { ...base, state: ok ? 'pass' : 'fail', evidence: o.evidence, path: o.path };
+        return { ...base, state: ok ? 'pass' : 'fail', evidence: o.evidence, path: o.path, ...exhibitOf(o) };
       }
     }
   });
+}
+
+function exhibitOf(o: { readonly exhibit?: Exhibit }): { exhibit?: Exhibit } {
+  return o.exhibit === undefined ? {} : { exhibit: o.exhibit };
 }

@@ -1,4 +1,5 @@
 import type { Evidence } from './evidence.js';
+import type { Exhibit } from './exhibit.js';
 
 export type VerdictState = 'pass' | 'fail' | 'skipped' | 'fault';
 
@@ -21,6 +22,8 @@ export interface CheckVerdict {
   readonly reason?: string;
   readonly faultKind?: string;
   readonly faultMethod?: string;
+  /** Data for a picture of what was measured (drawn by the HTML report). */
+  readonly exhibit?: Exhibit;
   /** The command that re-runs exactly this check. */
   readonly replay: string;
 }

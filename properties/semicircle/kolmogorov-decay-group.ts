@@ -44,6 +44,7 @@ export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettin
       const logD: number[] = [];
       const sigma: number[] = [];
       const means: string[] = [];
+      const points: { n: number; value: number; standardError: number }[] = [];
       let matrices = '';
       let total = 0;
       for (const size of ladder) {
@@ -63,6 +64,7 @@ export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettin
         // Delta method: se(log D̄) = se(D̄)/D̄.
         sigma.push(sums.standardErrorOf(0) / mean);
         means.push(`N=${size}: ${mean.toPrecision(4)}`);
+        points.push({ n: size, value: mean, standardError: sums.standardErrorOf(0) });
       }
       const fit = weightedSlope(logN, logD, sigma);
       // The admissible slopes form an interval [lower, upper] around the exponent −1; the test
@@ -73,6 +75,13 @@ export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettin
         {
           state: 'measured',
           path: `${pathDescription(matrices, 'eigenvalues', eigenvalueOrigin(context))}; mean distances ${means.join(', ')}`,
+          exhibit: {
+            kind: 'log-log-decay',
+            points,
+            slope: fit.slope,
+            intercept: fit.intercept,
+            label: `mean Kolmogorov distance to the semicircle over N (${label})`,
+          },
           evidence: toleranceTest({
             observed: fit.slope,
             expected: centre,

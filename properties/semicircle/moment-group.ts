@@ -11,6 +11,7 @@ import { semicircleEvenMoment } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
 import { RunningMeans } from '../support/running-means.js';
+import { SpectralHistogram } from '../support/spectral-histogram.js';
 import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from '../support/spectral-statistics.js';
 
 /** Moments E⟨H^{2k}⟩ for k = 1 … MAX_K. */
@@ -78,8 +79,10 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
       const source = await matrixSource(context, id, ensemble, size, settings.samples, false);
       const sums = new RunningMeans(MAX_K);
       const row = new Float64Array(MAX_K);
+      const histogram = new SpectralHistogram();
       for await (const matrix of source.matrices) {
         const values = await spectrumOf(context, matrix);
+        histogram.add(values);
         row.fill(0);
         for (const lambda of values) {
           const l2 = lambda * lambda;
@@ -93,11 +96,18 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
         sums.add(row);
       }
       const path = pathDescription(source.description, 'eigenvalues', eigenvalueOrigin(context));
+      const exhibit = {
+        kind: 'spectral-histogram' as const,
+        binEdges: histogram.binEdges(),
+        density: histogram.density(),
+        label: `eigenvalues of ${sums.count} matrices (${label}, N = ${size}) against the semicircle density`,
+      };
       return ks.map((k) => {
         const reference = evenMomentReference(ensemble, size, k);
         return {
           state: 'measured',
           path,
+          ...(k === 1 ? { exhibit } : {}),
           evidence: toleranceTest({
             observed: sums.meanOf(k - 1),
             expected: reference.value,
