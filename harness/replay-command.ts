@@ -1,5 +1,5 @@
 import { ensembleLabel } from './numeric/ensemble.js';
-import type { RunSettings } from './run-settings.js';
+import { DEFAULT_BUDGET, type RunSettings } from './run-settings.js';
 
 /** Quotes a word for a POSIX shell when it holds anything but plain characters. */
 export function shellQuote(word: string): string {
@@ -7,7 +7,7 @@ export function shellQuote(word: string): string {
 }
 
 /**
- * The command that re-runs one check: the same adapter, suite, sizes, samples, seed and
+ * The command that re-runs one check: the same adapter, suite, sizes, samples, seed, budget and
  * ensembles (so every drawn parameter and random stream is the same), restricted by --only.
  */
 export function replayCommand(settings: RunSettings, suite: string, checkId: string, replayCase = ''): string {
@@ -19,6 +19,7 @@ export function replayCommand(settings: RunSettings, suite: string, checkId: str
     `--ladder ${settings.ladder.join(',')}`,
     `--samples ${settings.samples}`,
     `--seed ${settings.seed}`,
+    settings.budget === DEFAULT_BUDGET ? '' : `--budget ${settings.budget}`,
     `--ensemble ${shellQuote(settings.ensembles.map(ensembleLabel).join(','))}`,
     `--only ${shellQuote(checkId)}`,
     replayCase === '' ? '' : `--case ${replayCase}`,

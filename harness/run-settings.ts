@@ -26,6 +26,11 @@ export interface RunSettings {
   readonly replayCase: string;
   /** The CLI words that select the adapter, for replay commands (e.g. `--module ./kernel.js`). */
   readonly adapterArguments: string;
+  /**
+   * Scales the sample counts of the fluctuation suite (1 = the default, sized for about a minute
+   * at N = 200 on two cores): more samples, more power, more time.
+   */
+  readonly budget: number;
 }
 
 export const DEFAULT_ALPHA = 1e-3;
@@ -33,3 +38,4 @@ export const DEFAULT_SAMPLES = 300;
 export const DEFAULT_SIZES: readonly number[] = [200];
 export const DEFAULT_LADDER: readonly number[] = [100, 200, 400, 800];
 export const DEFAULT_SEED = 20261202;
+export const DEFAULT_BUDGET = 1;

@@ -7,7 +7,7 @@ import { runChecks } from '../run-checks.js';
 import type { RunResult } from '../run-result.js';
 import type { RunSettings } from '../run-settings.js';
 import { openAdapter } from './open-adapter.js';
-import { parseReplayCase, parseAlpha, parseEnsembleList, parseLadder, parseNameList, parseSizeList, parseWholeNumber } from './parse-values.js';
+import { parseReplayCase, parseAlpha, parseBudget, parseEnsembleList, parseLadder, parseNameList, parseSizeList, parseWholeNumber } from './parse-values.js';
 import { UsageError } from './usage-error.js';
 
 /** The `check` command's arguments as yargs hands them over. */
@@ -20,6 +20,7 @@ export interface CheckArguments {
   readonly ladder: string | number;
   readonly samples: number;
   readonly seed: number;
+  readonly budget: number;
   readonly alpha: number;
   readonly ensemble: string;
   readonly only?: readonly string[];
@@ -40,6 +41,7 @@ export function resolveSettings(args: CheckArguments, adapterArguments: string):
     only: args.only ?? [],
     replayCase: parseReplayCase(args.case, args.only),
     adapterArguments,
+    budget: parseBudget(args.budget),
   };
 }
 

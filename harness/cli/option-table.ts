@@ -1,4 +1,4 @@
-import { DEFAULT_ALPHA, DEFAULT_LADDER, DEFAULT_SAMPLES, DEFAULT_SEED, DEFAULT_SIZES } from '../run-settings.js';
+import { DEFAULT_ALPHA, DEFAULT_BUDGET, DEFAULT_LADDER, DEFAULT_SAMPLES, DEFAULT_SEED, DEFAULT_SIZES } from '../run-settings.js';
 
 /**
  * The `check` command's options, declared once: yargs is configured from this table, and so is
@@ -39,6 +39,12 @@ export const CHECK_OPTIONS = {
   },
   samples: { type: 'number', describe: 'matrices per statistical estimate', default: DEFAULT_SAMPLES, group: 'Run' },
   seed: { type: 'number', describe: 'seed of every random stream and drawn parameter', default: DEFAULT_SEED, group: 'Run' },
+  budget: {
+    type: 'number',
+    describe: 'scale of the fluctuation suite\'s sample counts: more is slower and more powerful (each verdict states the error it could detect)',
+    default: DEFAULT_BUDGET,
+    group: 'Run',
+  },
   alpha: {
     type: 'number',
     describe: 'family-wise false-alarm level over the statistical checks (Holm)',

@@ -29,6 +29,13 @@ export function parseLadder(text: string | number | readonly (string | number)[]
   return sizes;
 }
 
+/** The fluctuation suite's budget: a positive number up to 1000 (sample counts scale with it). */
+export function parseBudget(text: string | number): number {
+  const budget = Number(text);
+  if (!(budget > 0 && budget <= 1000)) throw new UsageError(`--budget must be a number above 0 and at most 1000, got '${text}'`);
+  return budget;
+}
+
 export function parseAlpha(text: string | number): number {
   const alpha = Number(text);
   if (!(alpha > 0 && alpha < 1)) throw new UsageError(`--alpha must lie strictly between 0 and 1, got '${text}'`);

@@ -13,6 +13,7 @@ export function testSettings(overrides: Partial<RunSettings> = {}): RunSettings 
     only: [],
     replayCase: '',
     adapterArguments: '',
+    budget: 1,
     ...overrides,
   };
 }
