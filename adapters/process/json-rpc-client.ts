@@ -124,7 +124,9 @@ export class JsonRpcClient {
     }
     const pending = this.pending;
     if (pending === undefined) {
-      this.breakDown(`the program sent a message while no request was pending: ${excerpt(text)}`);
+      const reason = `the program sent a message while no request was pending: ${excerpt(text)}`;
+      this.options.onNote(`${reason}; it is stopped and started again for the next call`);
+      this.breakDown(reason);
       return;
     }
     let message: unknown;

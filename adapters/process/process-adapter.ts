@@ -15,7 +15,7 @@ import { JsonRpcClient, type RpcOutcome } from './json-rpc-client.js';
 import { decodeMatrix, type WireMatrix } from './matrix-codec.js';
 import { resolveProcessAdapterOptions, type ProcessAdapterOptions, type ResolvedProcessAdapterOptions } from './process-adapter-options.js';
 import { PROTOCOL_ERROR_CODES } from './protocol-error-codes.js';
-import { compileProtocolSchemas, resultProblem, type ProtocolMethod } from './protocol-schemas.js';
+import { compileProtocolSchemas, isProtocolMethod, resultProblem, type ProtocolMethod } from './protocol-schemas.js';
 import { requestParams } from './request-params.js';
 import { resultChecks } from './result-checks.js';
 import { complexFromWire, realFromWire, type WireComplex, type WireReal } from './wire-numbers.js';
@@ -212,8 +212,12 @@ export class ProcessAdapter implements Adapter {
 
   private describedAs(outcome: RpcOutcome): AdapterDescription {
     const result = this.checkedResult('describe', outcome) as { name: string; version: string; capabilities: string[] };
-    const known = result.capabilities.filter((c): c is Capability => (ALL_CAPABILITIES as readonly string[]).includes(c));
-    const unknown = result.capabilities.filter((c) => !(ALL_CAPABILITIES as readonly string[]).includes(c) && c !== 'describe');
+    // A capability counts when the harness knows it and this adapter can carry it over the protocol;
+    // the rest (a newer protocol's methods, typos) are noted and ignored.
+    const usable = (c: string): c is Capability =>
+      (ALL_CAPABILITIES as readonly string[]).includes(c) && isProtocolMethod(c) && c !== 'describe';
+    const known = result.capabilities.filter(usable);
+    const unknown = result.capabilities.filter((c) => !usable(c) && c !== 'describe');
     if (unknown.length > 0 && this.description === undefined) this.note(`capabilities this harness does not use, ignored: ${unknown.join(', ')}`);
     return { name: result.name, version: result.version, kind: 'process', capabilities: known };
   }

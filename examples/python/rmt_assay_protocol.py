@@ -146,29 +146,42 @@ def _complex_in(pair):
 
 # ---- methods ----------------------------------------------------------------------------------
 
+def _param(params, name):
+    if name not in params:
+        raise _ProtocolError(INVALID_PARAMS, "missing parameter %r" % name)
+    return params[name]
+
+
 def _eigenvalues(f):
-    return lambda p: {"values": [_real(x) for x in f(decode_matrix(p["matrix"]))]}
+    def call(p):
+        H = decode_matrix(_param(p, "matrix"))
+        return {"values": [_real(x) for x in f(H)]}
+    return call
 
 
 def _resolvent_trace(f):
     def call(p):
+        H = decode_matrix(_param(p, "matrix"))
+        points = [_complex_in(z) for z in _param(p, "points")]
         weight = decode_matrix(p["weight"]) if p.get("weight") is not None else None
-        points = [_complex_in(z) for z in p["points"]]
-        return {"values": [_complex_out(v) for v in f(decode_matrix(p["matrix"]), points, weight)]}
+        return {"values": [_complex_out(v) for v in f(H, points, weight)]}
     return call
 
 
 def _chain_trace(f):
     def call(p):
-        points = [_complex_in(z) for z in p["points"]]
-        weights = [decode_matrix(w) for w in p["weights"]]
-        return {"value": _complex_out(f(decode_matrix(p["matrix"]), points, weights))}
+        H = decode_matrix(_param(p, "matrix"))
+        points = [_complex_in(z) for z in _param(p, "points")]
+        weights = [decode_matrix(w) for w in _param(p, "weights")]
+        return {"value": _complex_out(f(H, points, weights))}
     return call
 
 
 def _sample(f):
-    return lambda p: {
-        "matrices": [encode_matrix(m) for m in f(p["ensemble"], int(p["size"]), int(p["seed"]), int(p["count"]))]}
+    def call(p):
+        args = [_param(p, "ensemble")] + [int(_param(p, name)) for name in ("size", "seed", "count")]
+        return {"matrices": [encode_matrix(m) for m in f(*args)]}
+    return call
 
 
 # Wire params -> your function -> wire result, for each method.
@@ -191,12 +204,7 @@ def _answer(table, describe, request):
     params = request.get("params")
     if not isinstance(params, dict):
         raise _ProtocolError(INVALID_PARAMS, "%s needs params as an object" % method)
-    try:
-        return table[method](params)
-    except (_ProtocolError, EnsembleNotOffered, NotAvailable):
-        raise
-    except KeyError as error:
-        raise _ProtocolError(INVALID_PARAMS, "%s: missing parameter %s" % (method, error))
+    return table[method](params)
 
 
 def serve(name, version, eigenvalues=None, resolvent_trace=None, chain_trace=None, sample=None):

@@ -113,6 +113,16 @@ describe('ProcessAdapter: faults that stop and restart the program', () => {
   });
 });
 
+describe('ProcessAdapter: a message nobody asked for', () => {
+  it('stops the program, notes why, and starts it again for the next call', async () => {
+    const adapter = await start('unsolicited');
+    expectTridiagonalSpectrum(await adapter.eigenvalues(tridiagonal(3)), 3);
+    await eventually(() => adapter.warnings().some((w) => w.startsWith('the program sent a message while no request was pending')));
+    await expectRecovers(adapter);
+    expect(adapter.log()).toMatch(/starting the program again for eigenvalues/);
+  });
+});
+
 describe('ProcessAdapter: faults in a well-framed response (the program keeps running)', () => {
   it('reports a result of the wrong shape with the JSON path', async () => {
     const adapter = await start('wrong-shape');

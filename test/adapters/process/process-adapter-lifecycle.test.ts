@@ -22,7 +22,7 @@ describe('ProcessAdapter lifecycle', () => {
     const adapter = await ProcessAdapter.start(kernelCommand('ok'), FAST);
     try {
       expect(await adapter.describe()).toMatchObject({ name: 'misbehaving-kernel', kind: 'process', capabilities: ['eigenvalues', 'resolvent_trace', 'sample'] });
-      expect(adapter.warnings()).toEqual(['capabilities this harness does not use, ignored: covariance']);
+      expect(adapter.warnings()).toEqual(['capabilities this harness does not use, ignored: spectral_gap']);
     } finally {
       await adapter.close();
     }
