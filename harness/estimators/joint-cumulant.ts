@@ -1,4 +1,5 @@
 import type { Complex } from '../numeric/complex.js';
+import { complexMean } from './bilinear-covariance.js';
 
 /** A joint cumulant estimate with its jackknife standard error per component. */
 export interface CumulantEstimate {
@@ -82,14 +83,7 @@ export function jointCumulant(columns: readonly Float64Array[]): CumulantEstimat
 
 function centredCopy(column: Float64Array): Float64Array {
   const n = column.length / 2;
-  let re = 0;
-  let im = 0;
-  for (let k = 0; k < n; k++) {
-    re += column[2 * k];
-    im += column[2 * k + 1];
-  }
-  re /= n;
-  im /= n;
+  const [re, im] = complexMean(column);
   const out = new Float64Array(column.length);
   for (let k = 0; k < n; k++) {
     out[2 * k] = column[2 * k] - re;
