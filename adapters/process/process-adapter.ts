@@ -1,24 +1,19 @@
 import {
   ALL_CAPABILITIES,
   AdapterFault,
-  EnsembleNotOffered,
-  NotAvailable,
   type Adapter,
   type AdapterDescription,
   type Capability,
 } from '../adapter.js';
 import type { Complex } from '../../harness/numeric/complex.js';
-import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
 import { BoundedTextLog } from './bounded-text-log.js';
 import { JsonRpcClient, type RpcOutcome } from './json-rpc-client.js';
-import { decodeMatrix, type WireMatrix } from './matrix-codec.js';
 import { resolveProcessAdapterOptions, type ProcessAdapterOptions, type ResolvedProcessAdapterOptions } from './process-adapter-options.js';
-import { PROTOCOL_ERROR_CODES } from './protocol-error-codes.js';
+import { protocolErrorAsException, protocolResults } from './protocol-results.js';
 import { compileProtocolSchemas, isProtocolMethod, resultProblem, type ProtocolMethod } from './protocol-schemas.js';
 import { requestParams } from './request-params.js';
-import { resultChecks } from './result-checks.js';
-import { complexFromWire, realFromWire, type WireComplex, type WireReal } from './wire-numbers.js';
 
 const MAX_WARNINGS = 100;
 const NOTE_PREFIX = '[rmt-assay] ';
@@ -71,49 +66,19 @@ export class ProcessAdapter implements Adapter {
   }
 
   async eigenvalues(matrix: SquareMatrix): Promise<Float64Array> {
-    const method = 'eigenvalues';
-    const result = (await this.resultOf(method, requestParams.eigenvalues(matrix))) as { values: WireReal[] };
-    resultChecks.count(method, '/result/values', result.values.length, matrix.size, `one per row of the ${matrix.size}×${matrix.size} matrix`);
-    const values = Float64Array.from(result.values, realFromWire);
-    resultChecks.finiteReals(method, '/result/values', values);
-    return values;
+    return protocolResults.eigenvalues(await this.resultOf('eigenvalues', requestParams.eigenvalues(matrix)), matrix);
   }
 
   async resolventTrace(matrix: SquareMatrix, points: readonly Complex[], weight?: SquareMatrix): Promise<Complex[]> {
-    const method = 'resolvent_trace';
-    const result = (await this.resultOf(method, requestParams.resolventTrace(matrix, points, weight))) as { values: WireComplex[] };
-    resultChecks.count(method, '/result/values', result.values.length, points.length, 'one per point');
-    const values = result.values.map(complexFromWire);
-    resultChecks.finiteComplexes(method, '/result/values', values);
-    return values;
+    return protocolResults.resolventTrace(await this.resultOf('resolvent_trace', requestParams.resolventTrace(matrix, points, weight)), points);
   }
 
   async chainTrace(matrix: SquareMatrix, points: readonly Complex[], weights: readonly SquareMatrix[]): Promise<Complex> {
-    const method = 'chain_trace';
-    const result = (await this.resultOf(method, requestParams.chainTrace(matrix, points, weights))) as { value: WireComplex };
-    const value = complexFromWire(result.value);
-    resultChecks.finiteComplexes(method, '/result', [value]);
-    return value;
+    return protocolResults.chainTrace(await this.resultOf('chain_trace', requestParams.chainTrace(matrix, points, weights)));
   }
 
   async sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): Promise<SquareMatrix[]> {
-    const method = 'sample';
-    const outcome = await this.request(method, requestParams.sample(ensemble, size, seed, count));
-    if (outcome.kind === 'error' && outcome.code === PROTOCOL_ERROR_CODES.ensembleNotOffered) {
-      throw new EnsembleNotOffered(ensembleLabel(ensemble));
-    }
-    const result = this.checkedResult(method, outcome) as { matrices: WireMatrix[] };
-    resultChecks.count(method, '/result/matrices', result.matrices.length, count, 'the requested count');
-    const field = ensembleConstants(ensemble, size).field;
-    return result.matrices.map((wire, k) => {
-      const path = `/result/matrices/${k}`;
-      const matrix = decodeMatrix(wire, method, path);
-      if (matrix.size !== size || matrix.field !== field) {
-        throw new AdapterFault(method, 'malformed-response', `${method}: ${path} is a ${matrix.size}×${matrix.size} ${matrix.field} matrix; ${ensembleLabel(ensemble)} at size ${size} needs ${size}×${size} ${field}`);
-      }
-      resultChecks.finiteMatrix(method, path, matrix);
-      return matrix;
-    });
+    return protocolResults.sample(await this.resultOf('sample', requestParams.sample(ensemble, size, seed, count), ensemble), ensemble, size, count);
   }
 
   /**
@@ -139,23 +104,10 @@ export class ProcessAdapter implements Adapter {
     await Promise.all([...this.stopping]);
   }
 
-  private async resultOf(method: ProtocolMethod, params: object): Promise<unknown> {
-    return this.checkedResult(method, await this.request(method, params));
-  }
-
-  /**
-   * A result that passed its schema. A JSON-RPC error becomes NotAvailable (code 1002: the checks
-   * that need it are skipped) or else an 'implementation-error' fault.
-   */
-  private checkedResult(method: ProtocolMethod, outcome: RpcOutcome): unknown {
-    if (outcome.kind === 'error' && outcome.code === PROTOCOL_ERROR_CODES.notAvailable) {
-      throw new NotAvailable(`${method}: the implementation cannot answer this request: ${outcome.message}`);
-    }
-    if (outcome.kind === 'error') {
-      throw new AdapterFault(method, 'implementation-error', `${method}: the implementation answered error ${outcome.code}: ${outcome.message}`);
-    }
-    const problem = resultProblem(method, outcome.result);
-    if (problem !== undefined) throw new AdapterFault(method, 'malformed-response', `${method}: the result does not have the protocol's shape: ${problem}`);
+  /** The program's result for `method` (still to be checked against its schema), or its error as an exception. */
+  private async resultOf(method: ProtocolMethod, params: object, ensemble?: EnsembleSpec): Promise<unknown> {
+    const outcome = await this.request(method, params);
+    if (outcome.kind === 'error') throw protocolErrorAsException(method, outcome.code, outcome.message, ensemble);
     return outcome.result;
   }
 
@@ -211,7 +163,10 @@ export class ProcessAdapter implements Adapter {
   }
 
   private describedAs(outcome: RpcOutcome): AdapterDescription {
-    const result = this.checkedResult('describe', outcome) as { name: string; version: string; capabilities: string[] };
+    if (outcome.kind === 'error') throw protocolErrorAsException('describe', outcome.code, outcome.message);
+    const problem = resultProblem('describe', outcome.result);
+    if (problem !== undefined) throw new AdapterFault('describe', 'malformed-response', `describe: the result does not have the protocol's shape: ${problem}`);
+    const result = outcome.result as { name: string; version: string; capabilities: string[] };
     // A capability counts when the harness knows it and this adapter can carry it over the protocol;
     // the rest (a newer protocol's methods, typos) are noted and ignored.
     const usable = (c: string): c is Capability =>

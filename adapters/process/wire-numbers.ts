@@ -24,3 +24,15 @@ export function realFromWire(value: WireReal): number {
 export function complexFromWire(value: WireComplex): Complex {
   return { re: realFromWire(value[0]), im: realFromWire(value[1]) };
 }
+
+/** The wire form of a number: non-finite values as the strings the protocol allows. */
+export function realToWire(x: number): WireReal {
+  if (Number.isNaN(x)) return 'NaN';
+  if (x === Infinity) return 'Infinity';
+  if (x === -Infinity) return '-Infinity';
+  return x;
+}
+
+export function complexToWire(z: Complex): [WireReal, WireReal] {
+  return [realToWire(z.re), realToWire(z.im)];
+}
