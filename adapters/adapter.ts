@@ -9,10 +9,31 @@ import type { SquareMatrix } from '../harness/numeric/square-matrix.js';
  * - resolvent_trace: ⟨G(z)A⟩ = Tr((H − z)⁻¹A)/N at given points, A = I when no weight is given.
  * - chain_trace:     ⟨G(z1)A1 ⋯ G(zk)Ak⟩.
  * - sample:          the implementation's own sampler for a named ensemble.
+ * - covariance:      the limiting covariance the implementation claims for the Tr statistics of two
+ *                    chains (`Adapter.covariance`).
+ * - sample_statistics: per-sample normalised chain traces of matrices the implementation draws and
+ *                    never hands over (`Adapter.sampleStatistics`).
  */
-export type Capability = 'eigenvalues' | 'resolvent_trace' | 'chain_trace' | 'sample';
+export type Capability = 'eigenvalues' | 'resolvent_trace' | 'chain_trace' | 'sample' | 'covariance' | 'sample_statistics';
 
-export const ALL_CAPABILITIES: readonly Capability[] = ['eigenvalues', 'resolvent_trace', 'chain_trace', 'sample'];
+export const ALL_CAPABILITIES: readonly Capability[] = [
+  'eigenvalues',
+  'resolvent_trace',
+  'chain_trace',
+  'sample',
+  'covariance',
+  'sample_statistics',
+];
+
+/**
+ * A chain G(z1)A1 G(z2)A2 ⋯ G(zk)Ak: the spectral parameters and one weight per parameter (the
+ * identity for an unweighted resolvent). No points is the empty chain, whose normalised trace is
+ * ⟨I⟩ = 1 and whose Tr statistic (N⟨I⟩ minus its mean) is 0.
+ */
+export interface ChainSpec {
+  readonly points: readonly Complex[];
+  readonly weights: readonly SquareMatrix[];
+}
 
 export interface AdapterDescription {
   readonly name: string;
@@ -41,6 +62,27 @@ export interface Adapter {
    * checked, never the values. Throws `EnsembleNotOffered` for an ensemble it does not sample.
    */
   sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): Promise<SquareMatrix[]>;
+  /**
+   * The limiting bilinear covariance lim_{N→∞} Cov(Tr(left) − E, Tr(right) − E) (no conjugation)
+   * that the implementation claims for the Tr statistics of two chains of `ensemble`; the weights'
+   * size is the N at which their normalised traces are taken. Throws `NotAvailable` for a case it
+   * does not offer. Optional: called only when the description declares 'covariance'.
+   */
+  covariance?(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex>;
+  /**
+   * `count` samples of `ensemble` at size N drawn by the implementation under `seed` (only the
+   * distribution is checked); for each sample, for each chain in order, the normalised trace
+   * ⟨G(z1)A1 ⋯ G(zk)Ak⟩ as chain_trace returns it (1 for the empty chain). The harness multiplies
+   * by N and centres. Throws `EnsembleNotOffered` for an ensemble it does not sample. Optional:
+   * called only when the description declares 'sample_statistics'.
+   */
+  sampleStatistics?(
+    ensemble: EnsembleSpec,
+    size: number,
+    seed: number,
+    count: number,
+    statistics: readonly ChainSpec[],
+  ): Promise<Complex[][]>;
   /** Releases what the adapter holds (a child process, a file handle). Safe to call twice. */
   close(): Promise<void>;
 }

@@ -4,8 +4,16 @@ import { pathToFileURL } from 'node:url';
 import type { Complex } from '../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../harness/numeric/ensemble.js';
 import { expectedDataLength, type SquareMatrix } from '../harness/numeric/square-matrix.js';
-import { AdapterFault, EnsembleNotOffered, type Adapter, type AdapterDescription, type Capability } from './adapter.js';
-import { checkedComplex, checkedComplexList, checkedRealList, describeValue } from './result-checks.js';
+import {
+  AdapterFault,
+  EnsembleNotOffered,
+  NotAvailable,
+  type Adapter,
+  type AdapterDescription,
+  type Capability,
+  type ChainSpec,
+} from './adapter.js';
+import { checkedComplex, checkedComplexList, checkedComplexRows, checkedRealList, describeValue } from './result-checks.js';
 import { ensembleLabel } from '../harness/numeric/ensemble.js';
 
 /** A pair [re, im], as the module interface and the process protocol carry complex numbers. */
@@ -17,7 +25,13 @@ export type ComplexPair = [number, number];
  * - `eigenvalues(matrix)` → ascending eigenvalues (array or Float64Array);
  * - `resolventTrace(matrix, points, weight?)` → ⟨G(z)A⟩ per point, as [re, im] pairs;
  * - `chainTrace(matrix, points, weights)` → ⟨G(z1)A1 ⋯ G(zk)Ak⟩ as [re, im];
- * - `sample(ensemble, size, seed, count)` → matrices, or null for an ensemble it does not offer.
+ * - `sample(ensemble, size, seed, count)` → matrices, or null for an ensemble it does not offer;
+ * - `covariance(ensemble, left, right)` → the limiting covariance it claims for the Tr statistics of
+ *   two chains `{ points: [re, im][], weights: matrices }`, as [re, im], or null for a case it does
+ *   not offer;
+ * - `sampleStatistics(ensemble, size, seed, count, statistics)` → per sample, per chain, the
+ *   normalised trace ⟨G(z1)A1 ⋯ G(zk)Ak⟩ as [re, im] (1 for a chain with no points), from `count`
+ *   matrices it draws itself; null for an ensemble it does not offer.
  * A matrix is `{ size, field: 'real' | 'complex', data: Float64Array }`, row-major, complex entries
  * interleaved (re, im). Functions may be async.
  */
@@ -28,6 +42,14 @@ export interface KernelModule {
   resolventTrace?(matrix: SquareMatrix, points: ComplexPair[], weight?: SquareMatrix): unknown;
   chainTrace?(matrix: SquareMatrix, points: ComplexPair[], weights: SquareMatrix[]): unknown;
   sample?(ensemble: EnsembleSpec, size: number, seed: number, count: number): unknown;
+  covariance?(ensemble: EnsembleSpec, left: ModuleChain, right: ModuleChain): unknown;
+  sampleStatistics?(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: ModuleChain[]): unknown;
+}
+
+/** A chain as the module interface carries it: points as [re, im] pairs. */
+export interface ModuleChain {
+  points: ComplexPair[];
+  weights: SquareMatrix[];
 }
 
 const ROUTINES: ReadonlyArray<[keyof KernelModule, Capability]> = [
@@ -35,6 +57,8 @@ const ROUTINES: ReadonlyArray<[keyof KernelModule, Capability]> = [
   ['resolventTrace', 'resolvent_trace'],
   ['chainTrace', 'chain_trace'],
   ['sample', 'sample'],
+  ['covariance', 'covariance'],
+  ['sampleStatistics', 'sample_statistics'],
 ];
 
 /** Thrown when the module cannot be used at all (missing file, syntax error, nothing exported). */
@@ -71,7 +95,7 @@ export class ModuleAdapter implements Adapter {
       throw new ModuleLoadError(`cannot load module ${file}: ${(error as Error).message.split('\n')[0]}`);
     }
     if (!ROUTINES.some(([key]) => typeof kernel[key] === 'function')) {
-      throw new ModuleLoadError(`module ${file} exports none of eigenvalues, resolventTrace, chainTrace, sample`);
+      throw new ModuleLoadError(`module ${file} exports none of ${ROUTINES.map(([key]) => key).join(', ')}`);
     }
     return new ModuleAdapter(kernel, path);
   }
@@ -119,7 +143,23 @@ export class ModuleAdapter implements Adapter {
     return result.map((m, i) => checkedMatrix(m, size, i));
   }
 
+  async covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex> {
+    const result = await this.call('covariance', () => this.kernel.covariance!(ensemble, chainCopy(left), chainCopy(right)));
+    if (result === null || result === undefined) throw new NotAvailable('the implementation does not offer this covariance');
+    return checkedComplex('covariance', result);
+  }
+
+  async sampleStatistics(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: readonly ChainSpec[]): Promise<Complex[][]> {
+    const result = await this.call('sample_statistics', () => this.kernel.sampleStatistics!(ensemble, size, seed, count, statistics.map(chainCopy)));
+    if (result === null || result === undefined) throw new EnsembleNotOffered(ensembleLabel(ensemble));
+    return checkedComplexRows('sample_statistics', result, count, statistics.length);
+  }
+
   async close(): Promise<void> {}
+}
+
+function chainCopy(chain: ChainSpec): ModuleChain {
+  return { points: pairs(chain.points), weights: chain.weights.map(copy) };
 }
 
 /** The implementation gets its own copy, so a routine that writes into its input cannot corrupt the harness's. */

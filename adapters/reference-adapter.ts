@@ -8,10 +8,11 @@ import {
   normalisedResolventTrace,
   weightedResolventTrace,
 } from '../harness/numeric/resolvent-statistics.js';
+import { chainStatistics } from '../harness/numeric/chain-statistics.js';
 import { sampleMatrix } from '../harness/numeric/sample-wigner.js';
 import type { SquareMatrix } from '../harness/numeric/square-matrix.js';
 import { TOOL_VERSION } from '../harness/tool-identity.js';
-import { ALL_CAPABILITIES, type Adapter, type AdapterDescription } from './adapter.js';
+import { ALL_CAPABILITIES, type Adapter, type AdapterDescription, type ChainSpec } from './adapter.js';
 
 /**
  * The harness's own engine behind the adapter interface: every capability, computed from one
@@ -45,6 +46,15 @@ export class ReferenceAdapter implements Adapter {
     const matrices: SquareMatrix[] = [];
     for (let i = 0; i < count; i++) matrices.push(sampleMatrix(ensemble, size, randomStream(seed, 'reference-sampler', i)));
     return matrices;
+  }
+
+  /** The same matrices as `sample` for the same seed, each reduced to its chain traces with one shared decomposition. */
+  async sampleStatistics(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: readonly ChainSpec[]): Promise<Complex[][]> {
+    const values: Complex[][] = [];
+    for (let i = 0; i < count; i++) {
+      values.push(chainStatistics(sampleMatrix(ensemble, size, randomStream(seed, 'reference-sampler', i)), statistics));
+    }
+    return values;
   }
 
   async close(): Promise<void> {}

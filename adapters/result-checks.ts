@@ -46,6 +46,20 @@ export function checkedComplexList(method: string, value: unknown, expectedCount
   return value.map((v, i) => checkedComplex(method, v, `value ${i}`));
 }
 
+/** A table of complex numbers: `rows` lists of `columns` values each (sample_statistics: per sample, per statistic). */
+export function checkedComplexRows(method: string, value: unknown, rows: number, columns: number): Complex[][] {
+  if (!Array.isArray(value)) {
+    throw new AdapterFault(method, 'malformed-response', `expected ${rows} lists of ${columns} complex numbers, got ${describeValue(value)}`);
+  }
+  if (value.length !== rows) throw new AdapterFault(method, 'invalid-value', `expected ${rows} rows, got ${value.length}`);
+  return value.map((row, i) => {
+    if (!Array.isArray(row) || row.length !== columns) {
+      throw new AdapterFault(method, 'malformed-response', `row ${i} should hold ${columns} complex numbers, got ${describeValue(row)}`);
+    }
+    return row.map((v, j) => checkedComplex(method, v, `row ${i}, value ${j}`));
+  });
+}
+
 export function describeValue(value: unknown): string {
   if (value === null) return 'null';
   if (Array.isArray(value)) return `an array of length ${value.length}`;

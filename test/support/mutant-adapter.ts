@@ -8,7 +8,7 @@ import { ReferenceAdapter } from '../../adapters/reference-adapter.js';
  */
 export function mutantAdapter(
   name: string,
-  overrides: Partial<Pick<Adapter, 'eigenvalues' | 'resolventTrace' | 'chainTrace' | 'sample'>>,
+  overrides: Partial<Pick<Adapter, 'eigenvalues' | 'resolventTrace' | 'chainTrace' | 'sample' | 'covariance' | 'sampleStatistics'>>,
   capabilities?: readonly Capability[],
 ): Adapter {
   const reference = new ReferenceAdapter();
@@ -21,6 +21,8 @@ export function mutantAdapter(
     resolventTrace: overrides.resolventTrace ?? ((m, p, w) => reference.resolventTrace(m, p, w)),
     chainTrace: overrides.chainTrace ?? ((m, p, w) => reference.chainTrace(m, p, w)),
     sample: overrides.sample ?? ((e, n, s, c) => reference.sample(e, n, s, c)),
+    covariance: overrides.covariance ?? ((e, l, r) => reference.covariance(e, l, r)),
+    sampleStatistics: overrides.sampleStatistics ?? ((e, n, s, c, st) => reference.sampleStatistics(e, n, s, c, st)),
     close: () => reference.close(),
   };
 }
