@@ -11,18 +11,23 @@ export function shellQuote(word: string): string {
  * ensembles (so every drawn parameter and random stream is the same), restricted by --only.
  */
 export function replayCommand(settings: RunSettings, suite: string, checkId: string, replayCase = ''): string {
+  return [runCommand(settings, suite), `--only ${shellQuote(checkId)}`, replayCase === '' ? '' : `--case ${replayCase}`]
+    .filter((w) => w.length > 0)
+    .join(' ');
+}
+
+/** The command that runs these settings again (all checks of `suites`, every suite by default). */
+export function runCommand(settings: RunSettings, suites = settings.suites.join(',')): string {
   const words = [
     'npx rmt-assay check',
     settings.adapterArguments,
-    `--suite ${suite}`,
+    `--suite ${suites}`,
     `--size ${settings.sizes.join(',')}`,
     `--ladder ${settings.ladder.join(',')}`,
     `--samples ${settings.samples}`,
     `--seed ${settings.seed}`,
     settings.budget === DEFAULT_BUDGET ? '' : `--budget ${settings.budget}`,
     `--ensemble ${shellQuote(settings.ensembles.map(ensembleLabel).join(','))}`,
-    `--only ${shellQuote(checkId)}`,
-    replayCase === '' ? '' : `--case ${replayCase}`,
   ];
   return words.filter((w) => w.length > 0).join(' ');
 }

@@ -87,9 +87,14 @@ export function responseEnvelopeProblem(value: unknown): string | undefined {
   return problemOf(schemas().response, value, '');
 }
 
-/** Checks the result of `method` (METHOD.result.json); paths read /result/…. */
-export function resultProblem(method: ProtocolMethod, result: unknown): string | undefined {
-  return problemOf(schemas().result[method], result, '/result');
+/** Checks the result of `method` (METHOD.result.json); paths read /result/… unless another prefix is given. */
+export function resultProblem(method: ProtocolMethod, result: unknown, pathPrefix = '/result'): string | undefined {
+  return problemOf(schemas().result[method], result, pathPrefix);
+}
+
+/** Checks the params of `method` (METHOD.params.json), with paths below `pathPrefix`. */
+export function paramsProblem(method: ProtocolMethod, params: unknown, pathPrefix: string): string | undefined {
+  return problemOf(schemas().params[method], params, pathPrefix);
 }
 
 /** Checks a whole request (request.json) and its params (METHOD.params.json). */

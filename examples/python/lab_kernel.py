@@ -17,7 +17,7 @@ import sys
 import numpy as np
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-from rmt_assay_protocol import EnsembleNotOffered, serve  # noqa: E402
+from rmt_assay_protocol import EnsembleNotOffered, answer_recording, serve  # noqa: E402
 
 
 def eigenvalues(H):
@@ -110,5 +110,9 @@ def sample(ensemble, size, seed, count):
 
 
 if __name__ == "__main__":
-    serve(name="lab-kernel (numpy)", version=np.__version__,
-          eigenvalues=eigenvalues, resolvent_trace=resolvent_trace, chain_trace=chain_trace, sample=sample)
+    functions = dict(eigenvalues=eigenvalues, resolvent_trace=resolvent_trace, chain_trace=chain_trace, sample=sample)
+    if len(sys.argv) == 4 and sys.argv[1] == "--answer-recording":
+        # Offline: python3 lab_kernel.py --answer-recording template.json answered.json
+        answer_recording(sys.argv[2], sys.argv[3], name="lab-kernel (numpy)", version=np.__version__, **functions)
+    else:
+        serve(name="lab-kernel (numpy)", version=np.__version__, **functions)

@@ -242,3 +242,51 @@ def serve(name, version, eigenvalues=None, resolvent_trace=None, chain_trace=Non
             traceback.print_exc(file=sys.stderr)
             send({"jsonrpc": "2.0", "id": request_id,
                   "error": {"code": COMPUTATION_FAILED, "message": "%s: %s" % (type(error).__name__, error)}})
+
+
+# ---- answering a recording offline ------------------------------------------------------------
+
+def _resolve_refs(value, matrices):
+    if isinstance(value, dict) and set(value) == {"ref"}:
+        return matrices[value["ref"]]
+    if isinstance(value, list):
+        return [_resolve_refs(v, matrices) for v in value]
+    return value
+
+
+def answer_recording(template_path, output_path, name, version,
+                     eigenvalues=None, resolvent_trace=None, chain_trace=None, sample=None):
+    """Answers every call of a recording with your functions, for results computed away from rmt-assay.
+
+    Make the template with rmt-assay (``rmt-assay check --offer ... --record-to template.json``),
+    run this where your code runs (a cluster job), then check the answers with
+    ``rmt-assay check --recorded answered.json`` and the same options. A call your functions do not
+    cover is answered "not available", so its checks are skipped (adapters/recorded/RECORDING.md).
+    """
+    functions = {"eigenvalues": eigenvalues, "resolvent_trace": resolvent_trace,
+                 "chain_trace": chain_trace, "sample": sample}
+    table = _dispatchers(functions)
+    with open(template_path) as source:
+        template = json.load(source)
+    matrices = template.get("matrices", [])
+    calls = []
+    for call in template["calls"]:
+        method = call["method"]
+        params = {key: _resolve_refs(value, matrices) for key, value in call["params"].items()}
+        answered = {"method": method, "params": call["params"]}
+        try:
+            if method not in table:
+                raise NotAvailable("%s is not offered by %s" % (method, name))
+            answered["result"] = table[method](params)
+        except EnsembleNotOffered as error:
+            answered["error"] = {"code": ENSEMBLE_NOT_OFFERED, "message": str(error)}
+        except NotAvailable as error:
+            answered["error"] = {"code": NOT_AVAILABLE, "message": str(error)}
+        except Exception as error:  # the computation failed: recorded as such, the others go on
+            traceback.print_exc(file=sys.stderr)
+            answered["error"] = {"code": COMPUTATION_FAILED, "message": "%s: %s" % (type(error).__name__, error)}
+        calls.append(answered)
+    answered_recording = dict(template, implementation={"name": str(name), "version": str(version)},
+                              capabilities=sorted(set(template["capabilities"]) & set(table)), calls=calls)
+    with open(output_path, "w") as target:
+        json.dump(answered_recording, target, allow_nan=False, separators=(",", ":"))

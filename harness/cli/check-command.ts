@@ -1,4 +1,4 @@
-import { AdapterFault } from '../../adapters/adapter.js';
+import { ALL_CAPABILITIES, AdapterFault, type Capability } from '../../adapters/adapter.js';
 import { SUITES, suiteNames } from '../../properties/suite-registry.js';
 import { jsonReporter } from '../reporters/json-reporter.js';
 import type { Reporter } from '../reporters/reporter.js';
@@ -6,6 +6,8 @@ import { terminalReporter } from '../reporters/terminal-reporter.js';
 import { runChecks } from '../run-checks.js';
 import type { RunResult } from '../run-result.js';
 import type { RunSettings } from '../run-settings.js';
+import { RecordingAdapter } from '../../adapters/recorded/recording-adapter.js';
+import { runCommand } from '../replay-command.js';
 import { openAdapter } from './open-adapter.js';
 import { parseReplayCase, parseAlpha, parseBudget, parseEnsembleList, parseLadder, parseNameList, parseSizeList, parseWholeNumber } from './parse-values.js';
 import { UsageError } from './usage-error.js';
@@ -14,6 +16,9 @@ import { UsageError } from './usage-error.js';
 export interface CheckArguments {
   readonly module?: string;
   readonly exec?: string;
+  readonly recorded?: string;
+  readonly 'record-to'?: string;
+  readonly offer?: string;
   readonly timeout: number;
   readonly suite: string;
   readonly size: string | number;
@@ -55,7 +60,10 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
   // Validate everything before starting an implementation.
   resolveSettings(args, '');
   if (!(args.timeout > 0) || !Number.isFinite(args.timeout)) throw new UsageError(`--timeout must be a positive number of seconds, got '${args.timeout}'`);
-  const opened = await openAdapter({ module: args.module, exec: args.exec, timeoutSeconds: args.timeout });
+  const offer = args.offer === undefined ? undefined : (parseNameList('offer', args.offer, ALL_CAPABILITIES) as Capability[]);
+  const opened = await openAdapter({ module: args.module, exec: args.exec, recorded: args.recorded, offer, timeoutSeconds: args.timeout });
+  const recordTo = args['record-to'];
+  const adapter = recordTo === undefined ? opened.adapter : new RecordingAdapter(opened.adapter);
   try {
     const settings = resolveSettings(args, opened.arguments);
     const interactive = out.isTTY === true && process.env.CI !== 'true';
@@ -65,7 +73,7 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
     let result: RunResult;
     try {
       result = await runChecks(
-        opened.adapter,
+        adapter,
         settings,
         suites,
         {
@@ -79,8 +87,9 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
       throw error;
     }
     for (const r of reporters) await r.onRunEnd?.(result);
+    if (adapter instanceof RecordingAdapter && recordTo !== undefined) await adapter.save(recordTo, runCommand(settings));
     return exitCodeOf(result);
   } finally {
-    await opened.adapter.close();
+    await adapter.close();
   }
 }

@@ -1,5 +1,7 @@
-import { AdapterFault, type Adapter } from '../../adapters/adapter.js';
+import { AdapterFault, type Adapter, type Capability } from '../../adapters/adapter.js';
+import { offeringOnly } from '../../adapters/capability-filter.js';
 import { ProcessAdapter } from '../../adapters/process/process-adapter.js';
+import { RecordedAdapter, RecordingError } from '../../adapters/recorded/recorded-adapter.js';
 import { ModuleAdapter, ModuleLoadError } from '../../adapters/module-adapter.js';
 import { ReferenceAdapter } from '../../adapters/reference-adapter.js';
 import { shellQuote } from '../replay-command.js';
@@ -8,6 +10,9 @@ import { UsageError } from './usage-error.js';
 export interface AdapterChoice {
   readonly module?: string;
   readonly exec?: string;
+  readonly recorded?: string;
+  /** Capabilities to use (all the implementation declares when absent). */
+  readonly offer?: readonly Capability[];
   /** Seconds to wait for one answer of an --exec program. */
   readonly timeoutSeconds: number;
 }
@@ -19,10 +24,29 @@ export interface OpenedAdapter {
   readonly log: () => string;
 }
 
-/** The adapter the options name: a module, a program, or the built-in reference engine by default. */
+/** The adapter the options name, restricted to the capabilities of --offer. */
 export async function openAdapter(choice: AdapterChoice): Promise<OpenedAdapter> {
-  const chosen = [choice.module, choice.exec].filter((c) => c !== undefined);
-  if (chosen.length > 1) throw new UsageError('name one implementation: --module or --exec, not both');
+  const opened = await openNamedAdapter(choice);
+  if (choice.offer === undefined) return opened;
+  return {
+    adapter: offeringOnly(opened.adapter, choice.offer),
+    arguments: `${opened.arguments} --offer ${choice.offer.join(',')}`.trim(),
+    log: opened.log,
+  };
+}
+
+/** The adapter the options name: a module, a program, a recording, or the built-in reference engine by default. */
+async function openNamedAdapter(choice: AdapterChoice): Promise<OpenedAdapter> {
+  const chosen = [choice.module, choice.exec, choice.recorded].filter((c) => c !== undefined);
+  if (chosen.length > 1) throw new UsageError('name one implementation: --module, --exec or --recorded, not two');
+  if (choice.recorded !== undefined) {
+    try {
+      return { adapter: RecordedAdapter.load(choice.recorded), arguments: `--recorded ${shellQuote(choice.recorded)}`, log: () => '' };
+    } catch (error) {
+      if (error instanceof RecordingError) throw new UsageError(error.message);
+      throw error;
+    }
+  }
   if (choice.exec !== undefined) {
     if (choice.exec.trim() === '') throw new UsageError('--exec needs a command');
     try {

@@ -23,6 +23,21 @@ export const CHECK_OPTIONS = {
     describe: 'check a program that speaks the JSON-RPC protocol on stdin/stdout (a shell command, e.g. "python3 kernel.py")',
     group: 'Adapter',
   },
+  recorded: {
+    type: 'string',
+    describe: 'check results recorded elsewhere: a recording file (see adapters/recorded/RECORDING.md)',
+    group: 'Adapter',
+  },
+  offer: {
+    type: 'string',
+    describe: 'use only these capabilities of the implementation, comma-separated (eigenvalues, resolvent_trace, chain_trace, sample, …)',
+    group: 'Adapter',
+  },
+  'record-to': {
+    type: 'string',
+    describe: 'also write every call to the implementation and its answer to this recording file',
+    group: 'Adapter',
+  },
   timeout: {
     type: 'number',
     describe: 'seconds to wait for one answer from an --exec program before it counts as hung',
