@@ -4,6 +4,9 @@ import { hideBin } from 'yargs/helpers';
 import { suiteNames } from '../../properties/suite-registry.js';
 import { TOOL_VERSION } from '../tool-identity.js';
 import { runCheckCommand, type CheckArguments } from './check-command.js';
+import { runCompareCommand, type CompareArguments } from './compare-command.js';
+import { COMPARE_OPTIONS } from './compare-options.js';
+import { declareOptions } from './declare-options.js';
 import { CHECK_OPTIONS } from './option-table.js';
 import { REFERENCE_QUANTITIES, referenceLines } from './reference-command.js';
 import { UsageError } from './usage-error.js';
@@ -32,6 +35,14 @@ async function main(argv: string[]): Promise<number> {
       },
       async (args) => {
         exitCode = await runCheckCommand(args as unknown as CheckArguments, process.stdout);
+      },
+    )
+    .command(
+      'compare',
+      'run two implementations on the same inputs and show where they differ (per-routine agreement, two-sample tests on fluctuations); exit 0 nothing distinguishes them, 1 something does, 2 bad usage',
+      (y) => declareOptions(y, COMPARE_OPTIONS),
+      async (args) => {
+        exitCode = await runCompareCommand(args as unknown as CompareArguments, process.stdout);
       },
     )
     .command(
