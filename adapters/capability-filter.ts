@@ -16,6 +16,8 @@ export function offeringOnly(adapter: Adapter, offered: readonly Capability[]): 
     resolventTrace: (m, p, w) => adapter.resolventTrace(m, p, w),
     chainTrace: (m, p, w) => adapter.chainTrace(m, p, w),
     sample: (e, n, s, c) => adapter.sample(e, n, s, c),
+    covariance: adapter.covariance?.bind(adapter),
+    sampleStatistics: adapter.sampleStatistics?.bind(adapter),
     close: () => adapter.close(),
   };
 }

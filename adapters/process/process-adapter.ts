@@ -4,6 +4,7 @@ import {
   type Adapter,
   type AdapterDescription,
   type Capability,
+  type ChainSpec,
 } from '../adapter.js';
 import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
@@ -79,6 +80,15 @@ export class ProcessAdapter implements Adapter {
 
   async sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): Promise<SquareMatrix[]> {
     return protocolResults.sample(await this.resultOf('sample', requestParams.sample(ensemble, size, seed, count), ensemble), ensemble, size, count);
+  }
+
+  async covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex> {
+    return protocolResults.covariance(await this.resultOf('covariance', requestParams.covariance(ensemble, left, right)));
+  }
+
+  async sampleStatistics(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: readonly ChainSpec[]): Promise<Complex[][]> {
+    const params = requestParams.sampleStatistics(ensemble, size, seed, count, statistics);
+    return protocolResults.sampleStatistics(await this.resultOf('sample_statistics', params, ensemble), count, statistics.length);
   }
 
   /**

@@ -40,6 +40,27 @@ export const protocolResults = {
     return decoded;
   },
 
+  covariance(result: unknown): Complex {
+    const method = 'covariance';
+    const { value } = schemaChecked(method, result) as { value: WireComplex };
+    const decoded = complexFromWire(value);
+    resultChecks.finiteComplexes(method, '/result', [decoded]);
+    return decoded;
+  },
+
+  sampleStatistics(result: unknown, count: number, chains: number): Complex[][] {
+    const method = 'sample_statistics';
+    const { values } = schemaChecked(method, result) as { values: WireComplex[][] };
+    resultChecks.count(method, '/result/values', values.length, count, 'one row per sample');
+    return values.map((row, k) => {
+      const path = `/result/values/${k}`;
+      resultChecks.count(method, path, row.length, chains, 'one value per requested chain');
+      const decoded = row.map(complexFromWire);
+      resultChecks.finiteComplexes(method, path, decoded);
+      return decoded;
+    });
+  },
+
   sample(result: unknown, ensemble: EnsembleSpec, size: number, count: number): SquareMatrix[] {
     const method = 'sample';
     const { matrices } = schemaChecked(method, result) as { matrices: WireMatrix[] };
@@ -63,6 +84,8 @@ export const protocolResultOf = {
   resolventTrace: (values: readonly Complex[]) => ({ values: values.map(complexToWire) }),
   chainTrace: (value: Complex) => ({ value: complexToWire(value) }),
   sample: (matrices: readonly SquareMatrix[]) => ({ matrices: matrices.map(encodeMatrix) }),
+  covariance: (value: Complex) => ({ value: complexToWire(value) }),
+  sampleStatistics: (rows: readonly (readonly Complex[])[]) => ({ values: rows.map((row) => row.map(complexToWire)) }),
 };
 
 function schemaChecked(method: ProtocolMethod, result: unknown): unknown {

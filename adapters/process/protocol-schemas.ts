@@ -1,8 +1,11 @@
 import { Ajv, type ValidateFunction } from 'ajv';
+import chain from './schemas/chain.json' with { type: 'json' };
 import chainTraceParams from './schemas/chain_trace.params.json' with { type: 'json' };
 import chainTraceResult from './schemas/chain_trace.result.json' with { type: 'json' };
 import complexPoint from './schemas/complex-point.json' with { type: 'json' };
 import complexValue from './schemas/complex-value.json' with { type: 'json' };
+import covarianceParams from './schemas/covariance.params.json' with { type: 'json' };
+import covarianceResult from './schemas/covariance.result.json' with { type: 'json' };
 import describeParams from './schemas/describe.params.json' with { type: 'json' };
 import describeResult from './schemas/describe.result.json' with { type: 'json' };
 import eigenvaluesParams from './schemas/eigenvalues.params.json' with { type: 'json' };
@@ -17,6 +20,8 @@ import resolventTraceResult from './schemas/resolvent_trace.result.json' with { 
 import response from './schemas/response.json' with { type: 'json' };
 import sampleParams from './schemas/sample.params.json' with { type: 'json' };
 import sampleResult from './schemas/sample.result.json' with { type: 'json' };
+import sampleStatisticsParams from './schemas/sample_statistics.params.json' with { type: 'json' };
+import sampleStatisticsResult from './schemas/sample_statistics.result.json' with { type: 'json' };
 import { schemaErrorText } from './schema-error-text.js';
 
 /**
@@ -27,7 +32,7 @@ import { schemaErrorText } from './schema-error-text.js';
  * To add a method: write METHOD.params.json and METHOD.result.json, import them here and add a row
  * to METHOD_SCHEMAS; shared pieces go into SHARED_SCHEMAS and are referenced by their $id.
  */
-const SHARED_SCHEMAS = [matrix, realValue, complexValue, complexPoint, ensemble, errorObject];
+const SHARED_SCHEMAS = [matrix, realValue, complexValue, complexPoint, ensemble, errorObject, chain];
 
 const METHOD_SCHEMAS = {
   describe: { params: describeParams, result: describeResult },
@@ -35,6 +40,8 @@ const METHOD_SCHEMAS = {
   resolvent_trace: { params: resolventTraceParams, result: resolventTraceResult },
   chain_trace: { params: chainTraceParams, result: chainTraceResult },
   sample: { params: sampleParams, result: sampleResult },
+  covariance: { params: covarianceParams, result: covarianceResult },
+  sample_statistics: { params: sampleStatisticsParams, result: sampleStatisticsResult },
 } as const;
 
 /** The methods of the protocol, by their wire names. */

@@ -1,6 +1,7 @@
 import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
+import type { ChainSpec } from '../adapter.js';
 import { encodeMatrix, type WireMatrix } from './matrix-codec.js';
 
 /**
@@ -40,7 +41,35 @@ export const requestParams = {
     // JSON.stringify drops an undefined meanDegree, which is the wire form of an absent one.
     return { ensemble, size, seed, count };
   },
+
+  covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): { ensemble: EnsembleSpec; left: WireChain; right: WireChain } {
+    return { ensemble, left: chainToWire(left), right: chainToWire(right) };
+  },
+
+  sampleStatistics(
+    ensemble: EnsembleSpec,
+    size: number,
+    seed: number,
+    count: number,
+    statistics: readonly ChainSpec[],
+  ): { ensemble: EnsembleSpec; size: number; seed: number; count: number; statistics: WireChain[] } {
+    if (statistics.length === 0) throw new RangeError('sample_statistics needs at least one chain');
+    return { ...requestParams.sample(ensemble, size, seed, count), statistics: statistics.map(chainToWire) };
+  },
 };
+
+/** A chain as it travels (schemas/chain.json). */
+export interface WireChain {
+  readonly points: [number, number][];
+  readonly weights: WireMatrix[];
+}
+
+function chainToWire(chain: ChainSpec): WireChain {
+  if (chain.points.length !== chain.weights.length) {
+    throw new RangeError(`a chain needs as many weights as points: got ${chain.points.length} points and ${chain.weights.length} weights`);
+  }
+  return { points: chain.points.map(pointToWire), weights: chain.weights.map(encodeMatrix) };
+}
 
 function pointToWire(z: Complex): [number, number] {
   if (!Number.isFinite(z.re) || !Number.isFinite(z.im)) throw new RangeError(`a spectral parameter must be finite, not (${z.re}, ${z.im})`);

@@ -3,7 +3,7 @@ import { Ajv } from 'ajv';
 import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
-import { NotAvailable, type Adapter, type AdapterDescription } from '../adapter.js';
+import { NotAvailable, type Adapter, type AdapterDescription, type ChainSpec } from '../adapter.js';
 import { paramsProblem, resultProblem } from '../process/protocol-schemas.js';
 import { protocolErrorAsException, protocolResults } from '../process/protocol-results.js';
 import { requestParams } from '../process/request-params.js';
@@ -85,6 +85,15 @@ export class RecordedAdapter implements Adapter {
 
   async sample(ensemble: EnsembleSpec, size: number, seed: number, count: number): Promise<SquareMatrix[]> {
     return protocolResults.sample(this.answer('sample', requestParams.sample(ensemble, size, seed, count), ensemble), ensemble, size, count);
+  }
+
+  async covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex> {
+    return protocolResults.covariance(this.answer('covariance', requestParams.covariance(ensemble, left, right)));
+  }
+
+  async sampleStatistics(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: readonly ChainSpec[]): Promise<Complex[][]> {
+    const params = requestParams.sampleStatistics(ensemble, size, seed, count, statistics);
+    return protocolResults.sampleStatistics(this.answer('sample_statistics', params, ensemble), count, statistics.length);
   }
 
   async close(): Promise<void> {}

@@ -2,7 +2,7 @@ import { writeFileSync } from 'node:fs';
 import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
-import { AdapterFault, EnsembleNotOffered, NotAvailable, type Adapter, type AdapterDescription } from '../adapter.js';
+import { AdapterFault, EnsembleNotOffered, NotAvailable, type Adapter, type AdapterDescription, type ChainSpec } from '../adapter.js';
 import { PROTOCOL_ERROR_CODES } from '../process/protocol-error-codes.js';
 import { protocolResultOf } from '../process/protocol-results.js';
 import { requestParams } from '../process/request-params.js';
@@ -73,6 +73,24 @@ export class RecordingAdapter implements Adapter {
       requestParams.sample(ensemble, size, seed, count) as unknown as Record<string, unknown>,
       () => this.inner.sample(ensemble, size, seed, count),
       protocolResultOf.sample,
+    );
+  }
+
+  covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex> {
+    return this.recorded(
+      'covariance',
+      requestParams.covariance(ensemble, left, right) as unknown as Record<string, unknown>,
+      () => this.inner.covariance!(ensemble, left, right),
+      protocolResultOf.covariance,
+    );
+  }
+
+  sampleStatistics(ensemble: EnsembleSpec, size: number, seed: number, count: number, statistics: readonly ChainSpec[]): Promise<Complex[][]> {
+    return this.recorded(
+      'sample_statistics',
+      requestParams.sampleStatistics(ensemble, size, seed, count, statistics) as unknown as Record<string, unknown>,
+      () => this.inner.sampleStatistics!(ensemble, size, seed, count, statistics),
+      protocolResultOf.sampleStatistics,
     );
   }
 

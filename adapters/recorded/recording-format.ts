@@ -41,3 +41,10 @@ export const MATRIX_MEMBERS: Readonly<Record<string, 'one' | 'list'>> = {
   weights: 'list',
   matrices: 'list',
 };
+
+/** The members of params that hold chains ({points, weights}), whose weights are matrices too. */
+export const CHAIN_MEMBERS: Readonly<Record<string, 'one' | 'list'>> = {
+  left: 'one',
+  right: 'one',
+  statistics: 'list',
+};

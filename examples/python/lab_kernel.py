@@ -47,6 +47,23 @@ def chain_trace(H, points, weights):
     return np.trace(product) / n
 
 
+def sample_statistics(ensemble, size, seed, count, chains):
+    """For each sampled matrix, every chain's normalised trace, from one eigendecomposition: with
+    B_j = U* A_j U and D_j = diag(1/(lam - z_j)), <G(z1)A1 ... G(zk)Ak> = Tr(D1 B1 ... Dk Bk)/N.
+    What a pipeline that never hands over its matrices would answer."""
+    rows = []
+    for H in sample(ensemble, size, seed, count):
+        lam, U = np.linalg.eigh(H)
+        row = []
+        for points, weights in chains:
+            product = np.eye(size, dtype=complex)
+            for z, A in zip(points, weights):
+                product = (product / (lam - z)[np.newaxis, :]) @ (U.conj().T @ A @ U)
+            row.append(np.trace(product) / size)
+        rows.append(row)
+    return rows
+
+
 # ---- sampling ---------------------------------------------------------------------------------
 # Entry laws of harness/numeric/ensemble.ts, scaled to unit variance before the 1/sqrt(N):
 # gaussian N(0, 1); rademacher +-1; uniform on [-sqrt 3, sqrt 3]; sparse-bernoulli +-1/sqrt(p)
@@ -110,7 +127,8 @@ def sample(ensemble, size, seed, count):
 
 
 if __name__ == "__main__":
-    functions = dict(eigenvalues=eigenvalues, resolvent_trace=resolvent_trace, chain_trace=chain_trace, sample=sample)
+    functions = dict(eigenvalues=eigenvalues, resolvent_trace=resolvent_trace, chain_trace=chain_trace, sample=sample,
+                     sample_statistics=sample_statistics)
     if len(sys.argv) == 4 and sys.argv[1] == "--answer-recording":
         # Offline: python3 lab_kernel.py --answer-recording template.json answered.json
         answer_recording(sys.argv[2], sys.argv[3], name="lab-kernel (numpy)", version=np.__version__, **functions)

@@ -19,6 +19,11 @@ The functions you may pass (each optional; the ones you pass are announced as ca
     chain_trace(H, points, weights)      -> complex: Tr(G(z1) A1 G(z2) A2 ... G(zk) Ak)/N
     sample(ensemble, size, seed, count)  -> count N×N matrices; raise EnsembleNotOffered(ensemble)
                                             for an ensemble you do not sample
+    covariance(ensemble, left, right)    -> complex: the limiting covariance you claim for the
+                                            statistics of two chains, each (points, weights)
+    sample_statistics(ensemble, size, seed, count, chains)
+                                         -> count rows, each one complex per chain (points, weights):
+                                            <G(z1) A1 ... G(zk) Ak> of that sample (1 for an empty chain)
 
 Any of them may raise NotAvailable("why") for a request it cannot answer: those checks are skipped.
 
@@ -184,9 +189,32 @@ def _sample(f):
     return call
 
 
+def _chain_in(chain):
+    points = [_complex_in(z) for z in _param(chain, "points")]
+    weights = [decode_matrix(w) for w in _param(chain, "weights")]
+    if len(points) != len(weights):
+        raise _ProtocolError(INVALID_PARAMS, "a chain needs as many weights as points")
+    return points, weights
+
+
+def _covariance(f):
+    def call(p):
+        return {"value": _complex_out(f(_param(p, "ensemble"), _chain_in(_param(p, "left")), _chain_in(_param(p, "right"))))}
+    return call
+
+
+def _sample_statistics(f):
+    def call(p):
+        args = [_param(p, "ensemble")] + [int(_param(p, name)) for name in ("size", "seed", "count")]
+        chains = [_chain_in(c) for c in _param(p, "statistics")]
+        return {"values": [[_complex_out(v) for v in row] for row in f(*args, chains)]}
+    return call
+
+
 # Wire params -> your function -> wire result, for each method.
 _ADAPTERS = {"eigenvalues": _eigenvalues, "resolvent_trace": _resolvent_trace,
-             "chain_trace": _chain_trace, "sample": _sample}
+             "chain_trace": _chain_trace, "sample": _sample,
+             "covariance": _covariance, "sample_statistics": _sample_statistics}
 
 
 def _dispatchers(functions):
@@ -207,10 +235,12 @@ def _answer(table, describe, request):
     return table[method](params)
 
 
-def serve(name, version, eigenvalues=None, resolvent_trace=None, chain_trace=None, sample=None):
+def serve(name, version, eigenvalues=None, resolvent_trace=None, chain_trace=None, sample=None,
+          covariance=None, sample_statistics=None):
     """Answers requests on stdin until it closes. Never returns before that."""
     functions = {"eigenvalues": eigenvalues, "resolvent_trace": resolvent_trace,
-                 "chain_trace": chain_trace, "sample": sample}
+                 "chain_trace": chain_trace, "sample": sample,
+                 "covariance": covariance, "sample_statistics": sample_statistics}
     table = _dispatchers(functions)
     describe = {"name": str(name), "version": str(version), "capabilities": sorted(table)}
     out = sys.stdout
@@ -254,8 +284,8 @@ def _resolve_refs(value, matrices):
     return value
 
 
-def answer_recording(template_path, output_path, name, version,
-                     eigenvalues=None, resolvent_trace=None, chain_trace=None, sample=None):
+def answer_recording(template_path, output_path, name, version, eigenvalues=None, resolvent_trace=None,
+                     chain_trace=None, sample=None, covariance=None, sample_statistics=None):
     """Answers every call of a recording with your functions, for results computed away from rmt-assay.
 
     Make the template with rmt-assay (``rmt-assay check --offer ... --record-to template.json``),
@@ -264,7 +294,8 @@ def answer_recording(template_path, output_path, name, version,
     cover is answered "not available", so its checks are skipped (adapters/recorded/RECORDING.md).
     """
     functions = {"eigenvalues": eigenvalues, "resolvent_trace": resolvent_trace,
-                 "chain_trace": chain_trace, "sample": sample}
+                 "chain_trace": chain_trace, "sample": sample,
+                 "covariance": covariance, "sample_statistics": sample_statistics}
     table = _dispatchers(functions)
     with open(template_path) as source:
         template = json.load(source)
