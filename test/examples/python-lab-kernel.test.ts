@@ -15,7 +15,7 @@ if (!hasNumpy) {
 describe.skipIf(!hasNumpy)('examples/python/lab_kernel.py through the ProcessAdapter', () => {
   defineKernelAgreementTests({
     command: `python3 ${JSON.stringify(KERNEL)}`,
-    capabilities: ['eigenvalues', 'resolvent_trace', 'chain_trace', 'sample'],
+    capabilities: ['eigenvalues', 'resolvent_trace', 'chain_trace', 'sample', 'sample_statistics'],
     sampled: [
       { kind: 'goe' },
       { kind: 'gue' },
