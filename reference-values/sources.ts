@@ -191,3 +191,48 @@ export const KAHAN_1987: Citation = {
   venue: 'The State of the Art in Numerical Analysis (A. Iserles and M. J. D. Powell, eds.), Clarendon Press, 165–211',
   note: FROM_MEMORY,
 };
+
+export const HE_KNOWLES_2017: Citation = {
+  authors: 'Y. He and A. Knowles',
+  year: 2017,
+  title: 'Mesoscopic eigenvalue statistics of Wigner matrices',
+  venue: 'Annals of Applied Probability 27(3), 1510–1550',
+  locator: 'the limiting variance (1/(2βπ²)) ∫∫ ((f(x) − f(y))/(x − y))² dx dy of Tr f(N^γ(H − E))',
+  doi: '10.1214/16-AAP1237',
+  note: FROM_MEMORY,
+};
+
+export const BOUTET_DE_MONVEL_KHORUNZHY_1999: Citation = {
+  authors: 'A. Boutet de Monvel and A. Khorunzhy',
+  year: 1999,
+  title: 'Asymptotic distribution of smoothed eigenvalue density. I. Gaussian random matrices',
+  venue: 'Random Operators and Stochastic Equations 7(1), 1–22',
+  note: 'details from memory; DOI not recorded',
+};
+
+export const MCCULLAGH_1987: Citation = {
+  authors: 'P. McCullagh',
+  year: 1987,
+  title: 'Tensor Methods in Statistics',
+  venue: 'Chapman and Hall, London (Monographs on Statistics and Applied Probability 29)',
+  locator: 'ch. 2 (joint cumulants as sums over set partitions of products of moments), ch. 4 (k-statistics)',
+  note: 'chapter numbers from memory',
+};
+
+export const COOLEY_TUKEY_1965: Citation = {
+  authors: 'J. W. Cooley and J. W. Tukey',
+  year: 1965,
+  title: 'An algorithm for the machine calculation of complex Fourier series',
+  venue: 'Mathematics of Computation 19(90), 297–301',
+  doi: '10.1090/S0025-5718-1965-0178586-1',
+  note: FROM_MEMORY,
+};
+
+export const DE_BOOR_2005: Citation = {
+  authors: 'C. de Boor',
+  year: 2005,
+  title: 'Divided differences',
+  venue: 'Surveys in Approximation Theory 1, 46–69',
+  locator: 'the contour-integral (Hermite) representation and the Leibniz rule',
+  note: FROM_MEMORY,
+};
