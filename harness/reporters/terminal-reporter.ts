@@ -1,6 +1,7 @@
 import type { RunResult } from '../run-result.js';
 import type { CheckVerdict } from '../verdict.js';
-import { shortNumber, shortQuantity } from './format-quantity.js';
+import { evidenceLines } from './evidence-lines.js';
+import { shortNumber } from './format-quantity.js';
 import type { Reporter, TextSink } from './reporter.js';
 
 export interface TerminalStyle {
@@ -17,6 +18,24 @@ function painter(interactive: boolean) {
 }
 
 /**
+ * Text from an implementation, made harmless for a terminal: control characters other than tab and
+ * line feed (an escape sequence could recolour, move the cursor or retitle the window) are shown
+ * as \uXXXX.
+ */
+function inert(text: string): string {
+  return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+}
+
+/** A duration in seconds as a person reads it: "45 s", "3 min 20 s", "2 h 5 min". */
+function readableDuration(seconds: number): string {
+  if (!Number.isFinite(seconds)) return '? s';
+  const s = Math.max(0, Math.ceil(seconds));
+  if (s < 60) return `${s} s`;
+  if (s < 3600) return `${Math.floor(s / 60)} min ${s % 60} s`;
+  return `${Math.floor(s / 3600)} h ${Math.floor((s % 3600) / 60)} min`;
+}
+
+/**
  * The evidence of a failed check. Sources and methods shared with an earlier failure in the same
  * summary are printed once and then referred to, so a run with many failures stays readable.
  */
@@ -26,25 +45,7 @@ function describeEvidence(v: CheckVerdict, seen: Set<string>): string[] {
     seen.add(text);
     return text;
   };
-  const e = v.evidence;
-  if (e === undefined) return [];
-  if (e.kind === 'statistical') {
-    return [
-      `  observed   ${shortQuantity(e.observed, 8)}`,
-      `  expected   ${shortQuantity(e.expected, 8)}`,
-      `  source     ${once(e.expectedSource)}`,
-      `  error bar  ±${shortQuantity(e.standardError, 3)} (${once(e.standardErrorMethod)})`,
-      `  allowance  ${shortNumber(e.allowance)} (${once(e.allowanceReason)})`,
-      `  excess     ${shortNumber(e.zScore)} standard errors beyond the allowance; p = ${shortNumber(e.pValue)}, Holm-adjusted ${shortNumber(v.adjustedPValue ?? NaN)}`,
-    ];
-  }
-  return [
-    `  observed   ${shortQuantity(e.observed, 12)}`,
-    `  expected   ${shortQuantity(e.expected, 12)}`,
-    `  source     ${once(e.expectedSource)}`,
-    `  ratio      ${shortNumber(e.ratio)} against threshold ${e.threshold} (${once(e.toleranceReason)})`,
-    ...(e.worstInput ? [`  input      ${e.worstInput}`] : []),
-  ];
+  return evidenceLines(v, once).map((line) => `  ${inert(line)}`);
 }
 
 /** The readable summary: failures first with everything needed to judge and replay them. */
@@ -54,21 +55,21 @@ export function formatTerminalSummary(result: RunResult, style: TerminalStyle): 
   const lines: string[] = [''];
   const seen = new Set<string>();
   for (const v of all.filter((c) => c.state === 'fail')) {
-    lines.push(`${paint('red', 'FAILED ')} ${v.id}`, `  ${v.title}`, ...describeEvidence(v, seen));
-    if (v.path) lines.push(`  path       ${v.path}`);
-    lines.push(`  replay     ${v.replay}`, '');
+    lines.push(`${paint('red', 'FAILED ')} ${inert(v.id)}`, `  ${inert(v.title)}`, ...describeEvidence(v, seen));
+    if (v.path) lines.push(`  path       ${inert(v.path)}`);
+    lines.push(`  replay     ${inert(v.replay)}`, '');
   }
   for (const v of all.filter((c) => c.state === 'fault')) {
-    lines.push(`${paint('red', 'FAULT  ')} ${v.id}`, `  ${v.reason}`, `  replay     ${v.replay}`, '');
+    lines.push(`${paint('red', 'FAULT  ')} ${inert(v.id)}`, `  ${inert(v.reason ?? '')}`, `  replay     ${inert(v.replay)}`, '');
   }
   const skippedReasons = new Map<string, number>();
   for (const v of all.filter((c) => c.state === 'skipped')) skippedReasons.set(v.reason ?? '', (skippedReasons.get(v.reason ?? '') ?? 0) + 1);
-  for (const [reason, n] of skippedReasons) lines.push(`${paint('yellow', 'SKIPPED')} ${n} check${n === 1 ? '' : 's'}: ${reason}`);
+  for (const [reason, n] of skippedReasons) lines.push(`${paint('yellow', 'SKIPPED')} ${n} check${n === 1 ? '' : 's'}: ${inert(reason)}`);
   if (style.verbose) {
     for (const v of all.filter((c) => c.state === 'pass')) {
       const e = v.evidence;
       const detail = e?.kind === 'statistical' ? `z-excess ${shortNumber(e.zScore)}` : e ? `ratio ${shortNumber(e.ratio)}` : '';
-      lines.push(`${paint('green', 'passed ')} ${v.id}  ${paint('dim', detail)}`);
+      lines.push(`${paint('green', 'passed ')} ${inert(v.id)}  ${paint('dim', detail)}`);
     }
   }
   const c = result.counts;
@@ -76,7 +77,7 @@ export function formatTerminalSummary(result: RunResult, style: TerminalStyle): 
   lines.push(
     '',
     paint(c.fail + c.fault > 0 ? 'red' : 'green', paint('bold', headline)),
-    `${result.falseAlarmControl.statisticalChecks} statistical checks under Holm's family-wise control at level ${result.falseAlarmControl.level}; deterministic checks against fixed ratio thresholds.`,
+    `${result.falseAlarmControl.statisticalChecks} statistical check${result.falseAlarmControl.statisticalChecks === 1 ? '' : 's'} under Holm's family-wise control at level ${result.falseAlarmControl.level}; deterministic checks against fixed ratio thresholds.`,
     paint('dim', 'What a pass means: ' + result.caveats.join(' ')),
     '',
   );
@@ -90,7 +91,7 @@ export function terminalReporter(sink: TextSink, style: TerminalStyle, now: () =
   return {
     onRunStart({ adapter, totalChecks }) {
       started = now();
-      sink.write(`rmt-assay · ${adapter.name} ${adapter.version} (${adapter.kind}) · offers ${adapter.capabilities.join(', ') || 'nothing'} · ${totalChecks} checks\n`);
+      sink.write(inert(`rmt-assay · ${adapter.name} ${adapter.version} (${adapter.kind}) · offers ${adapter.capabilities.join(', ') || 'nothing'} · ${totalChecks} checks`) + '\n');
     },
     onCheckFinished(_outcome, finished, total) {
       const elapsed = (now() - started) / 1000;
@@ -98,7 +99,7 @@ export function terminalReporter(sink: TextSink, style: TerminalStyle, now: () =
       if (style.interactive) {
         const width = 30;
         const filled = Math.round((width * finished) / total);
-        sink.write(`\r[${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${finished}/${total} checks, about ${Math.ceil(left)} s left   `);
+        sink.write(`\r[${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${finished}/${total} checks, about ${readableDuration(left)} left   `);
         if (finished === total) sink.write('\n');
       } else if (finished === total || finished - lastPlainReport >= Math.max(1, Math.ceil(total / 4))) {
         lastPlainReport = finished;
