@@ -1,7 +1,9 @@
+import { resolve } from 'node:path';
 import { ALL_CAPABILITIES, AdapterFault, type Capability } from '../../adapters/adapter.js';
 import { SUITES, suiteNames } from '../../properties/suite-registry.js';
-import { jsonReporter } from '../reporters/json-reporter.js';
+import { isInteractiveTerminal } from '../reporters/interactive-terminal.js';
 import type { Reporter } from '../reporters/reporter.js';
+import { fileReporter } from '../reporters/reporter-registry.js';
 import { terminalReporter } from '../reporters/terminal-reporter.js';
 import { runChecks } from '../run-checks.js';
 import type { RunResult } from '../run-result.js';
@@ -31,6 +33,8 @@ export interface CheckArguments {
   readonly only?: readonly string[];
   readonly case?: string;
   readonly report?: string;
+  readonly junit?: string;
+  readonly html?: string;
   readonly verbose: boolean;
 }
 
@@ -55,10 +59,23 @@ export function exitCodeOf(result: RunResult): number {
   return result.counts.fail + result.counts.fault > 0 ? 1 : 0;
 }
 
+/** The file reports asked for, by format name; an empty or repeated file name is a usage error. */
+function reportFiles(args: CheckArguments): Array<[format: string, file: string]> {
+  const asked = (['report', 'junit', 'html'] as const).filter((option) => args[option] !== undefined);
+  const files = asked.map((option): [string, string] => [option === 'report' ? 'json' : option, args[option]!]);
+  for (const [i, [, file]] of files.entries()) {
+    if (file.trim() === '') throw new UsageError(`--${asked[i]} needs a file`);
+    const other = files.findIndex(([, f]) => resolve(f) === resolve(file));
+    if (other !== i) throw new UsageError(`--${asked[other]} and --${asked[i]} name the same file '${file}'`);
+  }
+  return files;
+}
+
 export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStream): Promise<number> {
   if (args.module !== undefined && args.module.trim() === '') throw new UsageError('--module needs a file');
   // Validate everything before starting an implementation.
   resolveSettings(args, '');
+  reportFiles(args);
   if (!(args.timeout > 0) || !Number.isFinite(args.timeout)) throw new UsageError(`--timeout must be a positive number of seconds, got '${args.timeout}'`);
   const offer = args.offer === undefined ? undefined : (parseNameList('offer', args.offer, ALL_CAPABILITIES) as Capability[]);
   const opened = await openAdapter({ module: args.module, exec: args.exec, recorded: args.recorded, offer, timeoutSeconds: args.timeout });
@@ -66,9 +83,9 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
   const adapter = recordTo === undefined ? opened.adapter : new RecordingAdapter(opened.adapter);
   try {
     const settings = resolveSettings(args, opened.arguments);
-    const interactive = out.isTTY === true && process.env.CI !== 'true';
+    const interactive = isInteractiveTerminal(out, process.env);
     const reporters: Reporter[] = [terminalReporter(out, { interactive, verbose: args.verbose })];
-    if (args.report !== undefined) reporters.push(jsonReporter(args.report));
+    for (const [format, file] of reportFiles(args)) reporters.push(fileReporter(format, file));
     const suites = settings.suites.map((name) => SUITES.get(name)!);
     let result: RunResult;
     try {

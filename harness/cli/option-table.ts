@@ -78,7 +78,9 @@ export const CHECK_OPTIONS = {
     describe: "replay one randomised case of the check named by --only (fast-check's path, from a replay command)",
     group: 'Run',
   },
-  report: { type: 'string', describe: 'write the JSON report to this file', group: 'Output' },
+  report: { type: 'string', describe: 'write the JSON report (the whole result model, see its JSON Schema) to this file', group: 'Output' },
+  junit: { type: 'string', describe: 'write a JUnit XML report (one testcase per check) to this file', group: 'Output' },
+  html: { type: 'string', describe: 'write a self-contained HTML report with plots to this file', group: 'Output' },
   verbose: { type: 'boolean', describe: 'list passing checks too', default: false, group: 'Output' },
 } as const satisfies Record<string, OptionDeclaration>;
 

@@ -1,6 +1,5 @@
-import { writeFileSync } from 'node:fs';
 import type { RunResult } from '../run-result.js';
-import type { Reporter } from './reporter.js';
+import type { Reporter, TextSink } from './reporter.js';
 
 /**
  * The whole result model as JSON, for machines. Non-finite numbers, which JSON cannot hold, are
@@ -19,10 +18,14 @@ export function resultToJson(result: RunResult): string {
   );
 }
 
-export function jsonReporter(file: string): Reporter {
+/**
+ * Writes the report when the run ends, in one piece, to `sink` (a file, for the CLI). Its shape
+ * is published as schemas/run-result.schema.json (`formatVersion` says which version).
+ */
+export function jsonReporter(sink: TextSink): Reporter {
   return {
     onRunEnd(result) {
-      writeFileSync(file, resultToJson(result) + '\n');
+      sink.write(resultToJson(result) + '\n');
     },
   };
 }
