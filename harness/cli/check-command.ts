@@ -1,6 +1,6 @@
 import { resolve } from 'node:path';
 import { ALL_CAPABILITIES, AdapterFault, type Capability } from '../../adapters/adapter.js';
-import { SUITES, suiteNames } from '../../properties/suite-registry.js';
+import { SUITES } from '../../properties/suite-registry.js';
 import { isInteractiveTerminal } from '../reporters/interactive-terminal.js';
 import type { Reporter } from '../reporters/reporter.js';
 import { fileReporter } from '../reporters/reporter-registry.js';
@@ -10,6 +10,7 @@ import type { RunResult } from '../run-result.js';
 import type { RunSettings } from '../run-settings.js';
 import { RecordingAdapter } from '../../adapters/recorded/recording-adapter.js';
 import { runCommand } from '../replay-command.js';
+import { openBaselineOption, selectableSuites } from './baseline-option.js';
 import { openAdapter } from './open-adapter.js';
 import { parseReplayCase, parseAlpha, parseBudget, parseEnsembleList, parseLadder, parseNameList, parseSizeList, parseWholeNumber } from './parse-values.js';
 import { UsageError } from './usage-error.js';
@@ -30,6 +31,7 @@ export interface CheckArguments {
   readonly budget: number;
   readonly alpha: number;
   readonly ensemble: string;
+  readonly baseline?: string;
   readonly only?: readonly string[];
   readonly case?: string;
   readonly report?: string;
@@ -40,7 +42,7 @@ export interface CheckArguments {
 
 export function resolveSettings(args: CheckArguments, adapterArguments: string): RunSettings {
   return {
-    suites: parseNameList('suite', args.suite, suiteNames()),
+    suites: parseNameList('suite', args.suite, selectableSuites(args.baseline)),
     sizes: parseSizeList(args.size),
     ladder: parseLadder(args.ladder),
     samples: parseWholeNumber('samples', args.samples, 2, 10_000_000),
@@ -77,16 +79,17 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
   resolveSettings(args, '');
   reportFiles(args);
   if (!(args.timeout > 0) || !Number.isFinite(args.timeout)) throw new UsageError(`--timeout must be a positive number of seconds, got '${args.timeout}'`);
+  const baseline = openBaselineOption(args.baseline);
   const offer = args.offer === undefined ? undefined : (parseNameList('offer', args.offer, ALL_CAPABILITIES) as Capability[]);
   const opened = await openAdapter({ module: args.module, exec: args.exec, recorded: args.recorded, offer, timeoutSeconds: args.timeout });
   const recordTo = args['record-to'];
   const adapter = recordTo === undefined ? opened.adapter : new RecordingAdapter(opened.adapter);
   try {
-    const settings = resolveSettings(args, opened.arguments);
+    const settings = resolveSettings(args, [opened.arguments, baseline?.replayArguments ?? ''].filter((w) => w !== '').join(' '));
     const interactive = isInteractiveTerminal(out, process.env);
     const reporters: Reporter[] = [terminalReporter(out, { interactive, verbose: args.verbose })];
     for (const [format, file] of reportFiles(args)) reporters.push(fileReporter(format, file));
-    const suites = settings.suites.map((name) => SUITES.get(name)!);
+    const suites = [...settings.suites.flatMap((name) => SUITES.get(name) ?? []), ...(baseline === undefined ? [] : [baseline.suite])];
     let result: RunResult;
     try {
       result = await runChecks(

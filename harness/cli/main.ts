@@ -3,6 +3,8 @@ import yargs from 'yargs';
 import { hideBin } from 'yargs/helpers';
 import { suiteNames } from '../../properties/suite-registry.js';
 import { TOOL_VERSION } from '../tool-identity.js';
+import { runBaselineRecordCommand, type BaselineRecordArguments } from './baseline-command.js';
+import { BASELINE_RECORD_OPTIONS } from './baseline-options.js';
 import { runCheckCommand, type CheckArguments } from './check-command.js';
 import { runCompareCommand, type CompareArguments } from './compare-command.js';
 import { COMPARE_OPTIONS } from './compare-options.js';
@@ -46,6 +48,23 @@ async function main(argv: string[]): Promise<number> {
       },
     )
     .command(
+      'baseline',
+      'regression baselines: baseline record --out FILE writes one; check --baseline FILE compares a later version with it',
+      (y) =>
+        y
+          .command(
+            'record',
+            'run an implementation on a fixed, seeded input set and write its outputs and sampled statistics to --out FILE; exit 0 written, 2 bad usage',
+            (z) => declareOptions(z, BASELINE_RECORD_OPTIONS),
+            async (args) => {
+              exitCode = await runBaselineRecordCommand(args as unknown as BaselineRecordArguments, process.stdout);
+            },
+          )
+          .demandCommand(1, 'name a baseline command: record')
+          .strict(),
+      () => undefined,
+    )
+    .command(
       'reference <quantity> <at>',
       `print a reference value with its source (quantity: ${REFERENCE_QUANTITIES.join(', ')}; at: z, x or k)`,
       (y) =>
@@ -58,7 +77,7 @@ async function main(argv: string[]): Promise<number> {
         process.stdout.write(referenceLines(args as unknown as { quantity: string; at: string; size?: number; ensemble?: string }).join('\n') + '\n');
       },
     )
-    .demandCommand(1, 'name a command: check or reference')
+    .demandCommand(1, 'name a command: check, compare, baseline or reference')
     .fail((message, error) => {
       if (error instanceof UsageError) fail(error.message);
       if (error) throw error;

@@ -72,6 +72,11 @@ export const CHECK_OPTIONS = {
     default: 'goe,gue',
     group: 'Run',
   },
+  baseline: {
+    type: 'string',
+    describe: "also hold the implementation against a baseline written by 'rmt-assay baseline record' (the checks of the suite 'baseline'; --suite baseline runs only those)",
+    group: 'Run',
+  },
   only: { type: 'string', array: true, describe: 'run only the check with this id (repeatable)', group: 'Run' },
   case: {
     type: 'string',

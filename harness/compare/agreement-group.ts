@@ -12,16 +12,17 @@ import { probeAgreement, probeOutputs, type ProbeRoutine } from './probe-routine
 /** What an agreement check measured besides its verdict, for the agreement table. */
 export type AgreementMeasurement = Omit<RoutineAgreement, 'threshold' | 'state' | 'replay'>;
 
-const TOLERANCE: Record<ProbeRoutine, string> = {
+/** Why each routine's ratio has the scale it has (shared with the baseline comparisons). */
+export const AGREEMENT_TOLERANCE: Record<ProbeRoutine, string> = {
   eigenvalues:
     'max_i |Δλ_i| / (2Nε‖H‖₂): each backward-stable solver is exact for a matrix within Nε‖H‖₂ of H and Weyl’s inequality bounds the move ' +
-    '(Golub and Van Loan 2013, §8.3.5; Horn and Johnson 2013, Cor. 4.3.15); 2 for the two sides',
+    '(Golub and Van Loan 2013, §8.3.5; Horn and Johnson 2013, Cor. 4.3.15); 2 for the two results',
   resolvent_trace:
     '|Δ| / (2 s₁), s₁ = Nε‖A‖((‖H‖₂ + |z|)/d² + 1/d), d = dist(z, spectrum) from the harness’s eigenvalues (Higham 2002, §3.5; ' +
-    'properties/identities/error-scales.ts); 2 for the two sides; D = diag(1 + cos(2πi/N)/2)',
+    'properties/identities/error-scales.ts); 2 for the two results; D = diag(1 + cos(2πi/N)/2)',
   chain_trace:
     '|Δ| / (2 s_k), s_k = Nε Π_j(‖A_j‖/d_j) Σ_j((‖H‖₂ + |z_j|)/d_j + 1) (Higham 2002, §3.5; properties/identities/error-scales.ts); ' +
-    '2 for the two sides; D = diag(1 + cos(2πi/N)/2)',
+    '2 for the two results; D = diag(1 + cos(2πi/N)/2)',
 };
 
 /**
@@ -88,7 +89,7 @@ export function agreementGroup(
             expectedSource: `the right side (${right.description.name} ${right.description.version}) on the same matrix; left is ${left.description.name} ${left.description.version}`,
             scale: worst.scale,
             threshold: RATIO_THRESHOLD,
-            toleranceReason: TOLERANCE[routine],
+            toleranceReason: AGREEMENT_TOLERANCE[routine],
             worstInput: worst.where,
           }),
         },

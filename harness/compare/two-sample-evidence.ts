@@ -1,19 +1,26 @@
-import type { StatisticalEvidence } from '../evidence.js';
+import type { Quantity, StatisticalEvidence } from '../evidence.js';
 import { twoSampleKolmogorovSmirnov } from '../estimators/two-sample-kolmogorov-smirnov.js';
-import type { Complex } from '../numeric/complex.js';
 import { toleranceTest } from '../tolerance-test.js';
 
 /** An estimate from one side's samples, with its standard error (per component). */
 export interface SideEstimate {
-  readonly estimate: Complex;
-  readonly standardError: Complex;
+  readonly estimate: Quantity;
+  /** Of the estimate, per component for a complex one. */
+  readonly standardError: Quantity;
   readonly count: number;
+}
+
+/** √(a² + b²), per component for complex standard errors. */
+function combinedStandardError(a: Quantity, b: Quantity): Quantity {
+  if (typeof a === 'number' && typeof b === 'number') return Math.hypot(a, b);
+  if (typeof a !== 'number' && typeof b !== 'number') return { re: Math.hypot(a.re, b.re), im: Math.hypot(a.im, b.im) };
+  throw new RangeError('combinedStandardError: one estimate is real, the other complex');
 }
 
 /**
  * Whether two independent estimates of one quantity differ: H0 is that both sides estimate the
  * same value (same ensemble, same N, so a correct pair has exactly equal expectations and no
- * finite-N allowance is due). The difference is held against √(SE_L² + SE_R²) per component,
+ * finite-N allowance is due; a baseline and a later run of one implementation likewise). The difference is held against √(SE_L² + SE_R²) per component,
  * Welch's standard error of a difference of independent estimates (B. L. Welch, 1947, "The
  * generalization of 'Student's' problem when several different population variances are
  * involved", Biometrika 34, 28–35), with the normal approximation (hundreds of samples; common
@@ -29,13 +36,10 @@ export function differenceEvidence(
     observed: left.estimate,
     expected: right.estimate,
     expectedSource: rightSource,
-    standardError: {
-      re: Math.hypot(left.standardError.re, right.standardError.re),
-      im: Math.hypot(left.standardError.im, right.standardError.im),
-    },
+    standardError: combinedStandardError(left.standardError, right.standardError),
     standardErrorMethod: `√(SE_L² + SE_R²) per component (Welch 1947, Biometrika 34), each side's SE: ${estimateMethod}`,
     allowance: 0,
-    allowanceReason: 'none: both sides sample the same ensemble at the same N, so equal laws give equal expectations exactly',
+    allowanceReason: 'none: both samples come from the same ensemble at the same N, so equal laws give equal expectations exactly',
     sampleCount: left.count + right.count,
   });
 }
