@@ -12,7 +12,8 @@ import { chainStatistics } from '../harness/numeric/chain-statistics.js';
 import { sampleMatrix } from '../harness/numeric/sample-wigner.js';
 import type { SquareMatrix } from '../harness/numeric/square-matrix.js';
 import { TOOL_VERSION } from '../harness/tool-identity.js';
-import { ALL_CAPABILITIES, type Adapter, type AdapterDescription, type ChainSpec } from './adapter.js';
+import { ALL_CAPABILITIES, NotAvailable, type Adapter, type AdapterDescription, type ChainSpec } from './adapter.js';
+import { closedFormCovariance } from './closed-form-covariance.js';
 
 /**
  * The harness's own engine behind the adapter interface: every capability, computed from one
@@ -46,6 +47,15 @@ export class ReferenceAdapter implements Adapter {
     const matrices: SquareMatrix[] = [];
     for (let i = 0; i < count; i++) matrices.push(sampleMatrix(ensemble, size, randomStream(seed, 'reference-sampler', i)));
     return matrices;
+  }
+
+  /** The closed forms of closed-form-covariance.ts; NotAvailable where there is none. */
+  async covariance(ensemble: EnsembleSpec, left: ChainSpec, right: ChainSpec): Promise<Complex> {
+    const value = closedFormCovariance(ensemble, left, right);
+    if (value === null) {
+      throw new NotAvailable('the reference engine has no closed-form covariance for chains of length ≥ 2 with weights other than the identity');
+    }
+    return value;
   }
 
   /** The same matrices as `sample` for the same seed, each reduced to its chain traces with one shared decomposition. */

@@ -29,6 +29,14 @@ export interface StatisticalEvidence {
   readonly pValue: number;
   /** Number of independent samples behind the estimate. */
   readonly sampleCount: number;
+  /**
+   * Power, where the check states it: the smallest deviation from `expected`, relative to its
+   * scale (|expected|, or the statistic's natural size where the expected value is near 0), that
+   * the check would detect with probability 0.8 at its share of the run's level:
+   * (allowance + (z_{α/(2cm)} + z_{0.2})·SE)/scale, with m the statistical checks of its suite and
+   * c the components (2 for a complex quantity).
+   */
+  readonly detectableRelativeError?: number;
 }
 
 /**

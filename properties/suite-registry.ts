@@ -1,4 +1,5 @@
 import type { PropertySuite } from '../harness/check-group.js';
+import { fluctuationsSuite } from './fluctuations.js';
 import { identitiesSuite } from './identities.js';
 import { semicircleSuite } from './semicircle.js';
 
@@ -6,6 +7,7 @@ import { semicircleSuite } from './semicircle.js';
 export const SUITES: ReadonlyMap<string, PropertySuite> = new Map([
   [semicircleSuite.name, semicircleSuite],
   [identitiesSuite.name, identitiesSuite],
+  [fluctuationsSuite.name, fluctuationsSuite],
 ]);
 
 export function suiteNames(): string[] {

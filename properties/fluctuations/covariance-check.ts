@@ -1,0 +1,40 @@
+import type { Complex } from '../../harness/numeric/complex.js';
+import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
+import { nonGaussianFactor } from './fluctuation-allowances.js';
+import { covarianceFinding } from './fluctuation-evidence.js';
+import type { FluctuationCheck } from './fluctuation-check.js';
+import type { Statistic } from './statistic-book.js';
+
+/** An allowance factor (relative to the natural scale) and why. */
+export interface Allowance {
+  readonly factor: number;
+  readonly reason: string;
+}
+
+/** C·g/N for the O(1/N) corrections to a limit (fluctuation-allowances.ts). */
+export function finiteSizeAllowance(constant: number, c: EnsembleConstants, size: number): Allowance {
+  const g = nonGaussianFactor(c);
+  return {
+    factor: (constant * g) / size,
+    reason: `O(1/N) corrections to the limit, C·g/N with C = ${constant}, g = 1 + |κ4| + |σ_d² − 2/β| = ${g}, calibrated by simulation`,
+  };
+}
+
+/** Cov(X, Y) (bilinear) against a reference value with its source and allowance. */
+export function covarianceCheck(
+  name: string,
+  title: string,
+  x: Statistic,
+  y: Statistic,
+  expected: Complex,
+  expectedSource: string,
+  allowance: Allowance,
+): FluctuationCheck {
+  return {
+    name,
+    title,
+    statistical: true,
+    evaluate: (samples, power) =>
+      covarianceFinding(samples, x, y, { expected, expectedSource, allowanceFactor: allowance.factor, allowanceReason: allowance.reason }, power),
+  };
+}

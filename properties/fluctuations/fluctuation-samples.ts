@@ -1,0 +1,119 @@
+import { EnsembleNotOffered, type ChainSpec } from '../../adapters/adapter.js';
+import type { CheckContext } from '../../harness/check-group.js';
+import type { Complex } from '../../harness/numeric/complex.js';
+import { chainStatistics } from '../../harness/numeric/chain-statistics.js';
+import { ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
+import { matrixSource } from '../support/matrix-source.js';
+import type { Statistic, StatisticBook, Tier } from './statistic-book.js';
+
+/** Samples per sampleStatistics request: bounds memory and message size. */
+const STATISTICS_BATCH = 16;
+
+/**
+ * The observed Tr statistics N⟨chain⟩ of every chain of a book, sample by sample in the order the
+ * samples were produced (the independence check needs that order). Weighted chains are observed on
+ * the first `weightedCount` samples only.
+ */
+export class FluctuationSamples {
+  constructor(
+    private readonly columns: readonly Float64Array[],
+    readonly spectralCount: number,
+    readonly weightedCount: number,
+    /** The sentence a verdict's `path` carries. */
+    readonly path: string,
+    readonly origin: 'sample_statistics' | 'sampler',
+  ) {}
+
+  countFor(tier: Tier): number {
+    return tier === 'weighted' ? this.weightedCount : this.spectralCount;
+  }
+
+  /** The statistic on each of its samples (complex interleaved), uncentred; `count` truncates to a prefix. */
+  column(statistic: Statistic, count = this.countFor(statistic.tier)): Float64Array {
+    const out = new Float64Array(2 * count);
+    for (const { chain, coefficient, conjugate } of statistic.terms) {
+      const x = this.columns[chain];
+      const cr = coefficient.re;
+      const ci = coefficient.im;
+      const sign = conjugate === true ? -1 : 1;
+      for (let k = 0; k < count; k++) {
+        const xr = x[2 * k];
+        const xi = sign * x[2 * k + 1];
+        out[2 * k] += cr * xr - ci * xi;
+        out[2 * k + 1] += cr * xi + ci * xr;
+      }
+    }
+    return out;
+  }
+
+  /** Several statistics on their common samples (the shortest tier among them). */
+  columnsOnCommonSamples(statistics: readonly Statistic[]): Float64Array[] {
+    const count = Math.min(...statistics.map((s) => this.countFor(s.tier)));
+    return statistics.map((s) => this.column(s, count));
+  }
+}
+
+/**
+ * Gathers the samples behind the fluctuation checks of one ensemble and size, by the path the
+ * issue prescribes:
+ * - the implementation offers sample_statistics: its values are what is tested;
+ * - else it offers a sampler: its matrices, with every statistic computed by the harness's engine
+ *   from one decomposition per matrix (so the sampler is what is tested; the implementation's
+ *   per-matrix routines are the identities suite's business);
+ * - else nothing of it would be exercised, and the checks are skipped (EnsembleNotOffered).
+ */
+export async function gatherFluctuationSamples(
+  context: CheckContext,
+  key: string,
+  ensemble: EnsembleSpec,
+  book: StatisticBook,
+  spectralCount: number,
+  weightedCount: number,
+): Promise<FluctuationSamples> {
+  const size = book.size;
+  const columns = book.chains.map((c) => new Float64Array(2 * (c.tier === 'weighted' ? weightedCount : spectralCount)));
+  const positions = { spectral: book.positionsFor('spectral'), weighted: book.positionsFor('weighted') };
+  const store = (k: number, tier: Tier, values: readonly Complex[]) => {
+    const at = positions[tier];
+    for (let c = 0; c < columns.length; c++) {
+      if (at[c] < 0) continue;
+      columns[c][2 * k] = size * values[at[c]].re;
+      columns[c][2 * k + 1] = size * values[at[c]].im;
+    }
+  };
+  const tierOf = (k: number): Tier => (k < weightedCount ? 'weighted' : 'spectral');
+  const sampleStatistics = context.adapter.sampleStatistics;
+  if (context.capabilities.has('sample_statistics') && sampleStatistics !== undefined) {
+    let k = 0;
+    for (let batch = 0; k < spectralCount; batch++) {
+      const tier = tierOf(k);
+      const end = tier === 'weighted' ? weightedCount : spectralCount;
+      const count = Math.min(STATISTICS_BATCH, end - k);
+      const chains: ChainSpec[] = book.chainsFor(tier);
+      const rows = await sampleStatistics.call(context.adapter, ensemble, size, context.derivedSeed(key, batch), count, chains);
+      for (const row of rows) store(k++, tier, row);
+    }
+    return new FluctuationSamples(
+      columns,
+      spectralCount,
+      weightedCount,
+      `statistics: implementation's sample_statistics (${ensembleLabel(ensemble)}, N = ${size}, ${spectralCount} samples, the first ${weightedCount} with weighted chains)`,
+      'sample_statistics',
+    );
+  }
+  if (!context.capabilities.has('sample')) throw new EnsembleNotOffered(ensembleLabel(ensemble));
+  const source = await matrixSource(context, key, ensemble, size, spectralCount, true);
+  const chainsByTier = { spectral: book.chainsFor('spectral'), weighted: book.chainsFor('weighted') };
+  let k = 0;
+  for await (const matrix of source.matrices) {
+    const tier = tierOf(k);
+    store(k++, tier, chainStatistics(matrix, chainsByTier[tier]));
+  }
+  return new FluctuationSamples(
+    columns,
+    spectralCount,
+    weightedCount,
+    `matrices: ${source.description}; statistics: reference engine (one decomposition per matrix; eigenvectors for the first ${weightedCount}), so the sampler is what is tested; the implementation's per-matrix routines are the identities suite's business`,
+    'sampler',
+  );
+}
