@@ -10,7 +10,15 @@ import { runCompareCommand, type CompareArguments } from './compare-command.js';
 import { COMPARE_OPTIONS } from './compare-options.js';
 import { declareOptions } from './declare-options.js';
 import { CHECK_OPTIONS } from './option-table.js';
-import { REFERENCE_QUANTITIES, referenceLines } from './reference-command.js';
+import { REFERENCE_QUANTITIES, type ReferenceArguments, referenceLines } from './reference-command.js';
+import {
+  type TableOptions,
+  USER_TABLES_VARIABLE,
+  referenceExportText,
+  referenceListLines,
+  referenceShowLines,
+  writeExport,
+} from './reference-table-commands.js';
 import { UsageError } from './usage-error.js';
 
 const USAGE_EXIT = 2;
@@ -65,17 +73,58 @@ async function main(argv: string[]): Promise<number> {
       () => undefined,
     )
     .command(
-      'reference <quantity> <at>',
-      `print a reference value with its source (quantity: ${REFERENCE_QUANTITIES.join(', ')}; at: z, x or k)`,
+      'reference',
+      'browse and export the certified reference tables, or print a reference value (list, show NAME, export NAME, value QUANTITY AT)',
       (y) =>
         y
-          .positional('quantity', { type: 'string', choices: REFERENCE_QUANTITIES as unknown as string[] })
-          .positional('at', { type: 'string' })
-          .option('size', { type: 'number', describe: 'matrix size, for exact finite-N values' })
-          .option('ensemble', { type: 'string', describe: 'ensemble, for finite-N corrections' }),
-      (args) => {
-        process.stdout.write(referenceLines(args as unknown as { quantity: string; at: string; size?: number; ensemble?: string }).join('\n') + '\n');
-      },
+          .option('tables', {
+            type: 'string',
+            requiresArg: true,
+            describe: `a folder of your own tables (JSON, validated against the same schema); default $${USER_TABLES_VARIABLE}`,
+          })
+          .command('list', 'list the tables: name, rows, certified digits, origin, title', {}, (args) => {
+            process.stdout.write(referenceListLines(args as TableOptions).join('\n') + '\n');
+          })
+          .command(
+            'show <name>',
+            'show a table: quantity, conventions, sources, how it was produced, certified digits, rows',
+            (z) => z.positional('name', { type: 'string' }).option('all', { type: 'boolean', describe: 'print every row (default: the first 20)' }),
+            (args) => {
+              const a = args as unknown as TableOptions & { name: string; all?: boolean };
+              process.stdout.write(referenceShowLines(a.name, a).join('\n') + '\n');
+            },
+          )
+          .command(
+            'export <name>',
+            'export a table to take into your own tests',
+            (z) =>
+              z
+                .positional('name', { type: 'string' })
+                .option('format', { type: 'string', demandOption: true, requiresArg: true, describe: 'json (the table with its provenance) or csv' })
+                .option('output', { type: 'string', requiresArg: true, describe: 'write to FILE instead of stdout' }),
+            (args) => {
+              const a = args as unknown as TableOptions & { name: string; format: string; output?: string };
+              const text = writeExport(referenceExportText(a.name, a.format, a), a.output);
+              if (text === undefined) process.stderr.write(`rmt-assay: wrote ${a.output}\n`);
+              else process.stdout.write(text);
+            },
+          )
+          .command(
+            // `reference QUANTITY AT` (without "value") keeps working as before.
+            ['value [quantity] [at]', '$0 [quantity] [at]'],
+            `print a reference value with its source (quantity: ${REFERENCE_QUANTITIES.join(', ')}; at: z, x or k)`,
+            (z) =>
+              z
+                .positional('quantity', { type: 'string', describe: REFERENCE_QUANTITIES.join(', ') })
+                .positional('at', { type: 'string', describe: 'z (stieltjes), x (density, cdf) or k (moment)' })
+                .option('size', { type: 'number', describe: 'matrix size, for exact finite-N values' })
+                .option('ensemble', { type: 'string', describe: 'ensemble, for finite-N corrections' }),
+            (args) => {
+              process.stdout.write(referenceLines(args as unknown as ReferenceArguments).join('\n') + '\n');
+            },
+          )
+          .strict(),
+      () => undefined,
     )
     .demandCommand(1, 'name a command: check, compare, baseline or reference')
     .fail((message, error) => {

@@ -2,11 +2,9 @@ import type { CheckFinding, CheckGroup } from '../../harness/check-group.js';
 import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { RunSettings } from '../../harness/run-settings.js';
 import { toleranceTest } from '../../harness/tolerance-test.js';
-import {
-  evenMomentCorrection,
-  exactEvenMomentGOE,
-  exactEvenMomentGUE,
-} from '../../reference-values/finite-n-corrections.js';
+import { certifiedEvenMoment } from '../../reference-values/certified-even-moment.js';
+import { evenMomentCorrection } from '../../reference-values/finite-n-corrections.js';
+import { builtInTable } from '../../reference-values/reference-table-catalog.js';
 import { semicircleEvenMoment } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
@@ -18,12 +16,14 @@ import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from
 const MAX_K = 4;
 
 /**
- * GOE's coefficients of N⁻² and N⁻³ in E⟨H^{2k}⟩ (from E Tr X^{2k} = 2N³ + 5N² + 5N, 5N⁴ + 22N³ +
- * 52N² + 41N, 14N⁵ + 93N⁴ + 374N³ + 690N² + 509N; ../shared/THEORY.md, exact Wick enumeration),
+ * GOE's coefficient of N^{−j} in E⟨H^{2k}⟩ = Σ_r c_{k,r} N^{r−k−1}, i.e. c_{k,k+1−j} from the certified
+ * table goe-even-moment-polynomials (j = 2: 5, 52, 374 for k = 2, 3, 4; j = 3: 41, 690 for k = 3, 4):
  * the scale of the terms a general Wigner ensemble's expansion leaves out after its 1/N term.
  */
-const GOE_SECOND_ORDER: readonly number[] = [0, 0, 5, 52, 374];
-const GOE_THIRD_ORDER: readonly number[] = [0, 0, 0, 41, 690];
+function goeExpansionCoefficient(k: number, j: number): number {
+  const r = k + 1 - j;
+  return r < 1 ? 0 : Number(builtInTable('goe-even-moment-polynomials').bigint({ k, r }, 'coefficient') ?? 0n);
+}
 
 interface MomentReference {
   readonly value: number;
@@ -32,26 +32,25 @@ interface MomentReference {
   readonly allowanceReason: string;
 }
 
-/** The exact value where it is known (GOE, GUE), else the limit plus its 1/N correction. */
+/**
+ * The exact value where it is known (GOE, GUE: the certified tables of reference-values/tables, exact
+ * at every N for k ≤ 12, see certifiedEvenMoment), else the limit plus its 1/N correction.
+ */
 export function evenMomentReference(ensemble: EnsembleSpec, size: number, k: number): MomentReference {
-  const exact =
-    ensemble.kind === 'goe' ? exactEvenMomentGOE(size, k) : ensemble.kind === 'gue' ? exactEvenMomentGUE(size, k) : undefined;
+  const exact = ensemble.kind === 'goe' || ensemble.kind === 'gue' ? certifiedEvenMoment(ensemble.kind, size, k) : undefined;
   if (exact !== undefined) {
     return {
-      value: exact,
-      source:
-        ensemble.kind === 'gue'
-          ? `exact E⟨H^${2 * k}⟩ at N = ${size} by the Harer–Zagier recursion (Harer and Zagier 1986, Invent. Math. 85)`
-          : `exact E⟨H^${2 * k}⟩ at N = ${size}, polynomial in N from exact Wick enumeration (../shared/THEORY.md; recursion in Ledoux 2009, Ann. Inst. H. Poincaré Probab. Stat. 45)`,
-      allowance: 1e-12 * exact,
-      allowanceReason: 'none beyond rounding: the reference is exact at this N',
+      value: exact.normalised,
+      source: `E⟨H^${2 * k}⟩ = E Tr X^${2 * k}/N^${k + 1}, ${exact.source}`,
+      allowance: 0,
+      allowanceReason: 'none: the reference is exact at this N (one rounding to double)',
     };
   }
   const epsilon = expansionParameter(ensemble, size);
   const c = ensembleConstants(ensemble, size);
   // κ4 is O(1) for dense entries and about N/d for sparse ones; κ4/(Nε) is O(1) in both cases.
   const cumulantScale = 1 + Math.abs(c.kappa4) / (size * epsilon) + c.diagonalVariance;
-  const scaleOfRest = (GOE_SECOND_ORDER[k] + GOE_THIRD_ORDER[k] * epsilon) * cumulantScale;
+  const scaleOfRest = (goeExpansionCoefficient(k, 2) + goeExpansionCoefficient(k, 3) * epsilon) * cumulantScale;
   return {
     value: semicircleEvenMoment(k) + evenMomentCorrection(k, c) / size,
     source: `Catalan(${k}) (Wigner 1955; OEIS A000108) plus the 1/N correction of E Tr f(H) for f = x^${2 * k} (Bai and Yao 2005, Bernoulli 11)`,
