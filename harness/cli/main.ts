@@ -8,6 +8,8 @@ import { BASELINE_RECORD_OPTIONS } from './baseline-options.js';
 import { runCheckCommand, type CheckArguments } from './check-command.js';
 import { runCompareCommand, type CompareArguments } from './compare-command.js';
 import { COMPARE_OPTIONS } from './compare-options.js';
+import { CONFIG_FILE_OPTIONS } from './config-file.js';
+import { withConfiguration } from './configured-arguments.js';
 import { declareOptions } from './declare-options.js';
 import { CHECK_OPTIONS } from './option-table.js';
 import { REFERENCE_QUANTITIES, type ReferenceArguments, referenceLines } from './reference-command.js';
@@ -20,6 +22,7 @@ import {
   writeExport,
 } from './reference-table-commands.js';
 import { UsageError } from './usage-error.js';
+import { validateRunValues } from './validate-run-values.js';
 
 const USAGE_EXIT = 2;
 
@@ -27,6 +30,9 @@ function fail(message: string): never {
   process.stderr.write(`rmt-assay: ${message}\n`);
   process.exit(USAGE_EXIT);
 }
+
+/** Where a command reads its config file and writes, for `withConfiguration`. */
+const io = () => ({ cwd: process.cwd(), out: process.stdout, err: process.stderr });
 
 async function main(argv: string[]): Promise<number> {
   let exitCode = 0;
@@ -37,14 +43,11 @@ async function main(argv: string[]): Promise<number> {
     .command(
       'check',
       `run property suites against an implementation (suites: ${suiteNames().join(', ')}); exit 0 all passed, 1 a check failed, 2 bad usage`,
-      (y) => {
-        for (const [name, spec] of Object.entries(CHECK_OPTIONS)) {
-          y.option(name, { ...spec, requiresArg: spec.type !== 'boolean' });
-        }
-        return y;
-      },
+      (y) => declareOptions(declareOptions(y, CHECK_OPTIONS), CONFIG_FILE_OPTIONS),
       async (args) => {
-        exitCode = await runCheckCommand(args as unknown as CheckArguments, process.stdout);
+        exitCode = await withConfiguration(CHECK_OPTIONS, args, io(), validateRunValues, (values) =>
+          runCheckCommand(values as unknown as CheckArguments, process.stdout),
+        );
       },
     )
     .command(
@@ -63,9 +66,11 @@ async function main(argv: string[]): Promise<number> {
           .command(
             'record',
             'run an implementation on a fixed, seeded input set and write its outputs and sampled statistics to --out FILE; exit 0 written, 2 bad usage',
-            (z) => declareOptions(z, BASELINE_RECORD_OPTIONS),
+            (z) => declareOptions(declareOptions(z, BASELINE_RECORD_OPTIONS), CONFIG_FILE_OPTIONS),
             async (args) => {
-              exitCode = await runBaselineRecordCommand(args as unknown as BaselineRecordArguments, process.stdout);
+              exitCode = await withConfiguration(BASELINE_RECORD_OPTIONS, args, io(), validateRunValues, (values) =>
+                runBaselineRecordCommand(values as BaselineRecordArguments, process.stdout),
+              );
             },
           )
           .demandCommand(1, 'name a baseline command: record')

@@ -9,7 +9,12 @@ export interface OptionDeclaration {
   readonly array?: boolean;
   readonly describe: string;
   readonly default?: string | number | boolean;
-  readonly group: 'Adapter' | 'Run' | 'Output';
+  /**
+   * A comma-separated list on the command line, of numbers or of names: a config file may give it
+   * as a JSON array instead.
+   */
+  readonly list?: 'number' | 'string';
+  readonly group: 'Adapter' | 'Run' | 'Output' | 'Configuration';
 }
 
 export const CHECK_OPTIONS = {
@@ -31,6 +36,7 @@ export const CHECK_OPTIONS = {
   offer: {
     type: 'string',
     describe: 'use only these capabilities of the implementation, comma-separated (eigenvalues, resolvent_trace, chain_trace, sample, …)',
+    list: 'string',
     group: 'Adapter',
   },
   'record-to': {
@@ -44,12 +50,13 @@ export const CHECK_OPTIONS = {
     default: 60,
     group: 'Adapter',
   },
-  suite: { type: 'string', describe: 'suites to run, comma-separated', default: 'semicircle', group: 'Run' },
-  size: { type: 'string', describe: 'matrix sizes N, comma-separated', default: DEFAULT_SIZES.join(','), group: 'Run' },
+  suite: { type: 'string', describe: 'suites to run, comma-separated', default: 'semicircle', list: 'string', group: 'Run' },
+  size: { type: 'string', describe: 'matrix sizes N, comma-separated', default: DEFAULT_SIZES.join(','), list: 'number', group: 'Run' },
   ladder: {
     type: 'string',
     describe: 'matrix sizes of the rate-of-convergence fits, comma-separated, at least three',
     default: DEFAULT_LADDER.join(','),
+    list: 'number',
     group: 'Run',
   },
   samples: { type: 'number', describe: 'matrices per statistical estimate', default: DEFAULT_SAMPLES, group: 'Run' },
@@ -70,6 +77,7 @@ export const CHECK_OPTIONS = {
     type: 'string',
     describe: 'ensembles: goe, gue, wigner:real|complex:LAW[:d=DEGREE]:diag=LAW[:VARIANCE], comma-separated',
     default: 'goe,gue',
+    list: 'string',
     group: 'Run',
   },
   baseline: {

@@ -1,10 +1,10 @@
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { buildPrivateCli, runCli, type CliRun } from '../../support/private-cli-build.js';
+import { buildPrivateCli, PACKAGE_ROOT, runCli, type CliRun } from '../../support/private-cli-build.js';
 
-/** The compare and baseline commands as a user runs them: the built bin, in a child process. */
+/** compare, baseline and the config file as a user meets them: the built bin, in a child process. */
 let build: ReturnType<typeof buildPrivateCli>;
 const cli = (...args: string[]): CliRun => runCli(build.bin, args);
 const folder = mkdtempSync(join(tmpdir(), 'rmt-assay-cli-'));
@@ -71,5 +71,27 @@ describe('rmt-assay baseline record and check --baseline', () => {
     expect(changed.stdout).toContain('FAILED  baseline/resolvent-trace/goe/N=24');
     expect(changed.stdout).not.toContain('FAILED  baseline/eigenvalues');
     expect(changed.stdout).toContain(`replay     npx rmt-assay check --module ${demo('2.1')} --baseline ${file} --suite baseline`);
+  });
+});
+
+describe('rmt-assay check with a config file', () => {
+  const cwd = mkdtempSync(join(tmpdir(), 'rmt-assay-project-'));
+  writeFileSync(
+    join(cwd, 'rmt-assay.config.json'),
+    JSON.stringify({ module: join(PACKAGE_ROOT, demo('2.0')), suite: ['identities'], size: [16], ensemble: 'goe', seed: 3 }, null, 2),
+  );
+
+  it('prints the resolved configuration, flags over the file over defaults, and exits 0', () => {
+    const { code, stdout, stderr } = runCli(build.bin, ['check', '--print-config', '--seed', '8'], cwd);
+    expect(code).toBe(0);
+    expect(JSON.parse(stdout)).toMatchObject({ module: join(PACKAGE_ROOT, demo('2.0')), suite: ['identities'], size: [16], seed: 8, samples: 300 });
+    expect(stderr).toMatch(/flags: seed; config file rmt-assay\.config\.json: module, suite, size, ensemble/);
+  });
+
+  it('runs what the file says, with a flag naming another implementation', () => {
+    const { code, stdout } = runCli(build.bin, ['check', '--module', join(PACKAGE_ROOT, demo('2.1'))], cwd);
+    expect(code).toBe(1);
+    expect(stdout).toContain('demo lab spectral kernel 2.1');
+    expect(stdout).toContain('FAILED  identities/agreement/resolvent-trace');
   });
 });
