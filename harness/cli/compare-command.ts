@@ -1,9 +1,8 @@
-import { writeFileSync } from 'node:fs';
 import { AdapterFault } from '../../adapters/adapter.js';
 import { runComparison } from '../compare/run-comparison.js';
 import type { ComparisonResult } from '../compare/comparison-result.js';
 import { formatComparisonSummary } from '../reporters/comparison-summary.js';
-import { resultToJson } from '../reporters/json-reporter.js';
+import { fileReporter } from '../reporters/reporter-registry.js';
 import type { TextSink } from '../reporters/reporter.js';
 import { parseAdapterSpecification, SPECIFICATION_SYNTAX } from './adapter-specification.js';
 import { exitCodeOf, resolveSettings, type CheckArguments } from './check-command.js';
@@ -25,6 +24,8 @@ export interface CompareArguments {
   readonly ensemble?: string;
   readonly only?: readonly string[];
   readonly report?: string;
+  readonly junit?: string;
+  readonly html?: string;
   readonly verbose?: boolean;
 }
 
@@ -34,7 +35,7 @@ async function opened(option: 'left' | 'right', specification: string, timeoutSe
 
 /**
  * `rmt-assay compare --left SPEC --right SPEC`: both implementations on the same inputs. Prints the
- * agreement table and the summary, writes the JSON report if asked; exit 0 when nothing
+ * agreement table and the summary, writes the JSON, JUnit and HTML reports asked for; exit 0 when nothing
  * distinguishes the two, 1 when a check does (or a side faults), UsageError (exit 2) for bad usage.
  */
 export async function runCompareCommand(given: CompareArguments, out: TextSink & { readonly isTTY?: boolean }): Promise<number> {
@@ -44,7 +45,8 @@ export async function runCompareCommand(given: CompareArguments, out: TextSink &
   }
   const timeout = Number(args.timeout);
   if (!(timeout > 0) || !Number.isFinite(timeout)) throw new UsageError(`--timeout must be a positive number of seconds, got '${args.timeout}'`);
-  if (args.report !== undefined && args.report.trim() === '') throw new UsageError('--report needs a file');
+  const reports = (['report', 'junit', 'html'] as const).flatMap((option) => (args[option] === undefined ? [] : [{ option, file: args[option]! }]));
+  for (const { option, file } of reports) if (file.trim() === '') throw new UsageError(`--${option} needs a file`);
   // The run options mean what they mean for `check`; the check table's defaults fill the rest.
   const settings = resolveSettings(withOptionDefaults(CHECK_OPTIONS, { ...args }) as unknown as CheckArguments, '');
   parseAdapterSpecification('left', args.left, timeout);
@@ -74,7 +76,8 @@ export async function runCompareCommand(given: CompareArguments, out: TextSink &
       throw error;
     }
     out.write(formatComparisonSummary(result, { interactive: out.isTTY === true && process.env.CI !== 'true', verbose: args.verbose === true }));
-    if (args.report !== undefined) writeFileSync(args.report, resultToJson(result) + '\n');
+    // The file reports see the run result; the JSON one also carries the comparison (both sides, the agreement table).
+    for (const { option, file } of reports) await fileReporter(option === 'report' ? 'json' : option, file).onRunEnd?.(result);
     return exitCodeOf(result);
   } finally {
     await left.adapter.close();

@@ -1,7 +1,7 @@
 import { SPECIFICATION_SYNTAX } from './adapter-specification.js';
 import { CHECK_OPTIONS, type OptionDeclaration } from './option-table.js';
 
-const { timeout, size, samples, seed, alpha, ensemble, only, report, verbose } = CHECK_OPTIONS;
+const { timeout, size, samples, seed, alpha, ensemble, only, report, junit, html, verbose } = CHECK_OPTIONS;
 
 /**
  * The `compare` command's options: the two sides, and the run options it shares with `check`
@@ -26,5 +26,7 @@ export const COMPARE_OPTIONS = {
   ensemble,
   only,
   report: { ...report, describe: 'write the JSON report (the run result with its "comparison": both sides, the agreement table, the distinguishing checks) to this file' },
+  junit,
+  html,
   verbose,
 } as const satisfies Record<string, OptionDeclaration>;

@@ -19,14 +19,16 @@ function sink() {
 const folder = mkdtempSync(join(tmpdir(), 'rmt-assay-usage-'));
 
 describe('compare, in process', () => {
-  it('compares the reference engine with itself, prints the table and writes the report', async () => {
+  it('compares the reference engine with itself, prints the table and writes the reports', async () => {
     const out = sink();
-    const report = join(folder, 'compare.json');
-    const code = await runCompareCommand({ left: 'reference', right: 'reference', size: '12', samples: 30, ensemble: 'goe', report }, out);
+    const [report, junit, html] = ['compare.json', 'compare.xml', 'compare.html'].map((f) => join(folder, f));
+    const code = await runCompareCommand({ left: 'reference', right: 'reference', size: '12', samples: 30, ensemble: 'goe', report, junit, html }, out);
     expect(code).toBe(0);
     expect(out.text()).toMatch(/left {3}rmt-assay reference engine .* · reference\n {2}right {2}rmt-assay reference engine/);
     expect(out.text()).toMatch(/eigenvalues\s+goe\s+12\s+3\s+0\s+16\.0\s+0 \/ 50\s+agree/);
     expect(JSON.parse(readFileSync(report, 'utf8')).comparison.agreement).toHaveLength(3);
+    expect(readFileSync(junit, 'utf8')).toContain('compare/agreement/eigenvalues/goe/N=12');
+    expect(readFileSync(html, 'utf8')).toContain('compare/mean/goe/N=12');
   });
 
   const bad: Array<[string, Parameters<typeof runCompareCommand>[0], RegExp]> = [
@@ -35,6 +37,7 @@ describe('compare, in process', () => {
     ['a missing module', { left: 'reference', right: 'module:no/such.mjs' }, /module not found: no\/such\.mjs/],
     ['a size below 2', { left: 'reference', right: 'reference', size: 1 }, /--size must be a whole number from 2/],
     ['a zero timeout', { left: 'reference', right: 'reference', timeout: 0 }, /--timeout must be a positive number/],
+    ['an empty report file', { left: 'reference', right: 'reference', junit: ' ' }, /--junit needs a file/],
   ];
   for (const [what, args, message] of bad) {
     it(`refuses ${what} with a usage error`, async () => {
