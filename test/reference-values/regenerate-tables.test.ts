@@ -4,42 +4,19 @@ import { describe, expect, it } from 'vitest';
 import type { ReferenceTableContent } from '../../reference-values/reference-table.js';
 import { builtInTableDirectory } from '../../reference-values/reference-table-catalog.js';
 import { referenceTableText } from '../../reference-values/reference-table-text.js';
-import { chebyshevCoefficientsTable, chebyshevVariancesTable } from '../../reference-values/tables/chebyshev-variances.generate.js';
-import { goeEvenMomentTables } from '../../reference-values/tables/goe-even-moments.generate.js';
-import { gueEvenMomentTables } from '../../reference-values/tables/gue-even-moments.generate.js';
-import {
-  resolventCovarianceTracelessTable,
-  resolventCovarianceTracialTable,
-} from '../../reference-values/tables/resolvent-covariance-kernels.generate.js';
-import { semicircleStieltjesTable } from '../../reference-values/tables/semicircle-stieltjes.generate.js';
-import { tracyWidomDistributionsTable, tracyWidomMomentsTable } from '../../reference-values/tables/tracy-widom.generate.js';
-
-/** Every built-in table and the generator function that writes it (in-process: no build needed). */
-const GENERATORS: Record<string, () => ReferenceTableContent> = {
-  'gue-even-moments': gueEvenMomentTables.values,
-  'gue-even-moment-polynomials': gueEvenMomentTables.polynomials,
-  'goe-even-moments': goeEvenMomentTables.values,
-  'goe-even-moment-polynomials': goeEvenMomentTables.polynomials,
-  'semicircle-stieltjes': semicircleStieltjesTable,
-  'resolvent-covariance-tracial': resolventCovarianceTracialTable,
-  'resolvent-covariance-traceless': resolventCovarianceTracelessTable,
-  'chebyshev-coefficients': chebyshevCoefficientsTable,
-  'chebyshev-variances': chebyshevVariancesTable,
-  'tracy-widom-moments': tracyWidomMomentsTable,
-  'tracy-widom-distributions': tracyWidomDistributionsTable,
-};
+import { TABLE_GENERATORS } from '../../reference-values/tables/generate-all-tables.js';
 
 describe('regenerating every table from its generator reproduces the committed JSON byte for byte', () => {
   it('knows a generator for every committed table, and each generator sits beside its JSON', () => {
     const files = readdirSync(builtInTableDirectory()).filter((f) => f.endsWith('.json'));
-    expect(files.map((f) => f.replace(/\.json$/, '')).sort()).toEqual(Object.keys(GENERATORS).sort());
-    for (const name of Object.keys(GENERATORS)) {
+    expect(files.map((f) => f.replace(/\.json$/, '')).sort()).toEqual(Object.keys(TABLE_GENERATORS).sort());
+    for (const name of Object.keys(TABLE_GENERATORS)) {
       const table = JSON.parse(readFileSync(join(builtInTableDirectory(), `${name}.json`), 'utf8')) as ReferenceTableContent;
       expect(readdirSync(builtInTableDirectory())).toContain(table.production.generator);
     }
   });
 
-  for (const [name, generate] of Object.entries(GENERATORS)) {
+  for (const [name, generate] of Object.entries(TABLE_GENERATORS)) {
     it(name, () => {
       const committed = readFileSync(join(builtInTableDirectory(), `${name}.json`), 'utf8');
       const regenerated = referenceTableText(generate());
