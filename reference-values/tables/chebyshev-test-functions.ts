@@ -8,7 +8,7 @@ import { besselIDecimal } from '../high-precision/bessel-i-decimal.js';
  * (k ≥ 1), c_0 = (1/π)∫_0^π f(2cosθ) dθ, all in closed form:
  * - x^p, p = 1 … 8: (2cosθ)^p = Σ_j binom(p, j) e^{i(p−2j)θ} (binomial theorem), so c_k = 2·binom(p, (p − k)/2)
  *   for 1 ≤ k ≤ p with k ≡ p (mod 2), c_0 = binom(p, p/2) for even p, all others 0 (exact integers);
- * - e^x: e^{2cosθ} = I_0(2) + 2Σ_k I_k(2) cos kθ (DLMF 10.35.1), so c_0 = I_0(2), c_k = 2I_k(2);
+ * - e^x: e^{2cosθ} = I_0(2) + 2Σ_k I_k(2) cos kθ (DLMF 10.35.1, equation number from memory), so c_0 = I_0(2), c_k = 2I_k(2);
  * - the Gaussian bump e^{−x²/2} (THEORY.md's mesoscopic bump, used here at macroscopic scale):
  *   e^{−2cos²θ} = e^{−1}e^{−cos 2θ} = e^{−1}[I_0(1) + 2Σ_j (−1)^j I_j(1) cos 2jθ], so c_0 = e^{−1}I_0(1),
  *   c_{2j} = 2(−1)^j e^{−1} I_j(1), odd coefficients 0.
@@ -18,7 +18,7 @@ export interface ChebyshevTestFunction {
   readonly formula: string;
   /** c_k in decimal arithmetic (exact for the powers). */
   readonly coefficient: (D: DecimalConstructor, k: number) => Decimal;
-  /** Whether c_k = 0 for all k > this degree (the powers), else Infinity. */
+  /** The degree beyond which every c_k is 0 (the powers); Infinity for the others. */
   readonly degree: number;
 }
 

@@ -37,7 +37,7 @@ function production(what: string) {
   };
 }
 
-const certification = `two discretisations agree to at least ${TRACY_WIDOM_CERTIFIED_DIGITS + 2} significant digits (checked on every regeneration); certified to ${TRACY_WIDOM_CERTIFIED_DIGITS}, leaving two digits for the Airy function's error (≤ 1e-24 absolute) and the operator cut (≤ 1e-35). test/reference-values checks the moments against the published digits (Bornemann 2010; THEORY.md) and F2 against an independent 34-digit evaluation of det(I − K_Ai) with mpmath where present`;
+const certification = `two discretisations agree to at least ${TRACY_WIDOM_CERTIFIED_DIGITS + 2} significant digits (checked on every regeneration); certified to ${TRACY_WIDOM_CERTIFIED_DIGITS}, leaving two digits for the Airy function's error (≤ 1e-24 absolute) and the operator cut (≤ 1e-35). test/reference-values checks the moments against the published digits (Bornemann 2010; THEORY.md) and F2 against an independent 30-digit evaluation of det(I − K_Ai) with mpmath where present`;
 
 const toText = (x: DoubleDouble): string => decimalCell(decimalDoubleDouble.toDecimal(x), PRINTED_DIGITS);
 

@@ -61,7 +61,7 @@ describe('Γ in decimal arithmetic (Stirling series, DLMF 5.11.1)', () => {
     expect(gammaDecimal(G, 0.5).pow(2).minus(G.acos(-1)).abs().toNumber()).toBeLessThan(1e-43);
     const reflection = gammaDecimal(G, new G(1).div(3)).times(gammaDecimal(G, new G(2).div(3)));
     expect(reflection.minus(G.acos(-1).times(2).div(new G(3).sqrt())).abs().toNumber()).toBeLessThan(1e-43);
-    // Γ(1/3) = 2.678938534707747633…, DLMF 5.4.E? (value from memory, to 19 digits)
+    // Γ(1/3) = 2.678938534707747633… (value from memory), here to 19 digits.
     expect(gammaDecimal(G, new G(1).div(3)).toSignificantDigits(19).toString()).toBe('2.678938534707747634');
   });
 });
