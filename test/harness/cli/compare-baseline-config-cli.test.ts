@@ -1,6 +1,8 @@
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildPrivateCli, PACKAGE_ROOT, runCli, type CliRun } from '../../support/private-cli-build.js';
 
@@ -93,5 +95,18 @@ describe('rmt-assay check with a config file', () => {
     expect(code).toBe(1);
     expect(stdout).toContain('demo lab spectral kernel 2.1');
     expect(stdout).toContain('FAILED  identities/agreement/resolvent-trace');
+  });
+});
+
+describe('the built package’s main export', () => {
+  it('loads in plain Node and runs a conformance assertion, as a lab’s test suite would import it', () => {
+    const index = join(dirname(build.bin), '..', 'index.js');
+    const script =
+      `const m = await import(${JSON.stringify(pathToFileURL(index).href)});` +
+      `const r = await m.expectConformance(new m.ReferenceAdapter(), { suites: ['identities'], sizes: [12], ensembles: ['goe'] });` +
+      `process.stdout.write(JSON.stringify(r.counts));`;
+    const run = spawnSync(process.execPath, ['--input-type=module', '-e', script], { cwd: PACKAGE_ROOT, encoding: 'utf8' });
+    expect(run.stderr).toBe('');
+    expect(JSON.parse(run.stdout)).toMatchObject({ fail: 0, fault: 0 });
   });
 });
