@@ -93,6 +93,14 @@ describe('resolving options from flags, the config file and defaults', () => {
   });
 });
 
+describe('the CI recipe’s config file', () => {
+  it('is valid and resolves to what the recipe says', () => {
+    const c = configuredArguments(CHECK_OPTIONS, {}, join(import.meta.dirname, '..', '..', '..', 'examples', 'ci'), validateRunValues);
+    expect(c.config.file).toBe(CONFIG_FILE_NAME);
+    expect(c.values).toMatchObject({ exec: 'python3 src/lab_kernel.py', suite: ['semicircle', 'identities'], size: [100, 200], baseline: 'baselines/lab-kernel.json' });
+  });
+});
+
 describe('--print-config', () => {
   it('prints the resolved options as a config file would hold them, and where each came from', async () => {
     let out = '';
