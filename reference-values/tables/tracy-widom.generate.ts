@@ -21,7 +21,7 @@ const ARITHMETIC = 'double-double (about 32 significant digits) from IEEE double
 
 const conventions = {
   normalisation:
-    'Tracy and Widom\u2019s: F_β(s) = lim P(N^{2/3}(λ_max − 2) ≤ s) for the Gaussian ensembles scaled to the semicircle on [−2, 2] (F4 in the 1996 normalisation, mean ≈ −2.3069)',
+    'Tracy and Widom\u2019s: F_β(s) = lim P(N^{2/3}(λ_max − 2) ≤ s) for GOE (β = 1) and GUE (β = 2) scaled to the semicircle on [−2, 2] (THEORY.md, "Edge"); F4 in Tracy and Widom\u2019s 1996 normalisation (mean ≈ −2.3069), whose relation to a GSE sample depends on how its quaternion entries are scaled',
   beta: [1, 2, 4],
   notes:
     'F1(s) = det(I − B_s), F2(s) = det(I − B_s)·det(I + B_s), F4(s) = (det(I − B_{√2 s}) + det(I + B_{√2 s}))/2, B_t(u, v) = Ai(t + u + v) on L²(0, ∞)',
@@ -41,7 +41,7 @@ const certification = `two discretisations agree to at least ${TRACY_WIDOM_CERTI
 
 const toText = (x: DoubleDouble): string => decimalCell(decimalDoubleDouble.toDecimal(x), PRINTED_DIGITS);
 
-/** Throws unless a and b (decimal strings) agree to `digits` significant digits. */
+/** Throws unless a agrees with b to `digits` significant digits (relative to |b|). */
 function expectAgreement(label: string, a: DoubleDouble, b: DoubleDouble, digits: number): void {
   const x = decimalDoubleDouble.toDecimal(a);
   const y = decimalDoubleDouble.toDecimal(b);
