@@ -1,4 +1,4 @@
-import { stridedNorm } from './householder-norm.js';
+import { householderReflector } from './householder-reflector.js';
 import type { SymmetricTridiagonal } from './symmetric-tridiagonal.js';
 
 /**
@@ -36,8 +36,6 @@ export interface RealReduction {
   /** τ_k for k = 0 … N − 3 (τ_k = 0 means H_k = I). */
   readonly tau: Float64Array;
 }
-
-const SAFE_MIN = 2.2250738585072014e-308;
 
 /**
  * Where entry (i, j), j ≥ i, of the packed array lives: rowOffset(n, i) + j. "Row" i of the packed
@@ -104,39 +102,22 @@ export function tridiagonaliseReal(a: Float64Array, n: number, keepReflectors: b
 }
 
 /**
- * Reflector for column c (dlarfg, Anderson et al. 1999): x = A[c + 1 …, c] (packed row c), returns
- * τ and β with (I − τ v vᵀ) x = β e₁; v goes to `v` (indices c + 1 …, v[c + 1] = 1, zero
- * elsewhere) and, when kept, to row c of `store`.
+ * Reflector for column c (householder-reflector.ts, after dlarfg, Anderson et al. 1999): x =
+ * A[c + 1 …, c] (packed row c, whose tail it overwrites), returns τ and β with (I − τ v vᵀ) x = β e₁;
+ * v goes to `v` (indices c + 1 …, v[c + 1] = 1, zero elsewhere) and, when kept, to row c of `store`.
  */
 function makeReflector(p: Float64Array, n: number, c: number, v: Float64Array, store: Float64Array | null): { tau: number; beta: number } {
   v.fill(0);
   const r = c + 1;
   const o = rowOffset(n, c);
-  let alpha = p[o + r];
-  let xnorm = stridedNorm(p, o + r + 1, n - r - 1, 1);
+  const reflector = householderReflector(p, o + r, n - r);
   v[r] = 1;
-  if (store !== null) store[c * n + r] = 1;
-  if (xnorm === 0) return { tau: 0, beta: alpha };
-  let beta = -Math.sign(alpha || 1) * Math.hypot(alpha, xnorm);
-  // dlarfg's rescaling when |β| is below the safe minimum, so 1/(α − β) cannot overflow.
-  let rescale = 1;
-  let steps = 0;
-  while (Math.abs(beta) < SAFE_MIN && steps < 20) {
-    steps++;
-    rescale /= SAFE_MIN;
-    for (let j = r + 1; j < n; j++) p[o + j] /= SAFE_MIN;
-    alpha /= SAFE_MIN;
-    beta /= SAFE_MIN;
+  if (reflector.tau !== 0) v.set(p.subarray(o + r + 1, o + n), r + 1);
+  if (store !== null) {
+    store[c * n + r] = 1;
+    store.set(v.subarray(r + 1, n), c * n + r + 1);
   }
-  if (steps > 0) {
-    xnorm = stridedNorm(p, o + r + 1, n - r - 1, 1);
-    beta = -Math.sign(alpha || 1) * Math.hypot(alpha, xnorm);
-  }
-  const tau = (beta - alpha) / beta;
-  const s = 1 / (alpha - beta);
-  for (let j = r + 1; j < n; j++) v[j] = p[o + j] * s;
-  if (store !== null) store.set(v.subarray(r + 1, n), c * n + r + 1);
-  return { tau, beta: beta / rescale };
+  return reflector;
 }
 
 /**
