@@ -9,10 +9,17 @@ export interface BenchmarkOptions {
   readonly log: (line: string) => void;
 }
 
-/** One timed row: seconds are the best of several repetitions; null where the peer is absent. */
+/**
+ * One timed row. Seconds are the best of several repetitions (wall clock); null where the peer is
+ * absent. `unit` says what the seconds are for: one call of the routine ('call'), or one sample of
+ * a throughput loop ('sample'; samples per second = 1/seconds). `workers` is how many workers ran
+ * our side (1: in this process, single-threaded).
+ */
 export interface BenchmarkRow {
   readonly routine: string;
   readonly n: number;
+  readonly unit: 'call' | 'sample';
+  readonly workers: number;
   readonly ours_s: number;
   readonly numpy_1thread_s: number | null;
   readonly numpy_s: number | null;

@@ -1,13 +1,18 @@
 import { writeFileSync } from 'node:fs';
 import type { BenchmarkGroup, BenchmarkRow } from './benchmark-group.js';
 import { eigenBench } from './eigen-bench.js';
+import { fluctuationThroughputBench } from './fluctuation-throughput-bench.js';
+import { inProcessRunner } from './throughput-runner.js';
+import { tridiagonalModelBench } from './tridiagonal-model-bench.js';
 
 /**
- * `npm run bench [-- --sizes 200,500] [--json FILE] [--group eigen]`: runs each benchmark group,
+ * `npm run bench [-- --sizes 200,500] [--json FILE] [--group NAME]`: runs each benchmark group,
  * prints a table (ours, the peer, ratios ours/peer) and optionally writes the rows as JSON.
- * A new group is a file under bench/ exporting a BenchmarkGroup, added to GROUPS.
+ * --sizes applies to every group run (pair it with --group). A new group is a file under bench/
+ * exporting a BenchmarkGroup, added to GROUPS. The fluctuation-throughput group takes the list of
+ * runners to time (throughput-runner.ts): a worker-pool runner goes into that list.
  */
-const GROUPS: readonly BenchmarkGroup[] = [eigenBench];
+const GROUPS: readonly BenchmarkGroup[] = [eigenBench, tridiagonalModelBench, fluctuationThroughputBench([inProcessRunner])];
 
 interface Arguments {
   readonly sizes: number[] | null;
@@ -44,13 +49,31 @@ function seconds(x: number | null): string {
   return x < 1 ? `${(x * 1000).toFixed(1)} ms` : `${x.toFixed(2)} s`;
 }
 
+/** Ours/peer in time (how many times slower ours is); two digits below 0.1 so a large speed-up still reads. */
 function ratio(ours: number, peer: number | null): string {
-  return peer === null ? 'n/a' : `${(ours / peer).toFixed(1)}×`;
+  if (peer === null) return 'n/a';
+  const r = ours / peer;
+  return `${r < 0.1 ? r.toPrecision(2) : r.toFixed(1)}×`;
+}
+
+/** Seconds per call, or for a throughput row seconds per sample followed by samples per second. */
+function timeCell(x: number | null, unit: BenchmarkRow['unit']): string {
+  if (x === null || unit === 'call') return seconds(x);
+  return `${seconds(x)} (${(1 / x).toFixed(x < 0.01 ? 0 : 1)}/s)`;
 }
 
 function table(rows: readonly BenchmarkRow[]): string {
-  const header = ['routine', 'N', 'ours', 'numpy 1 thread', 'ours/numpy 1t', 'numpy', 'ours/numpy'];
-  const body = rows.map((r) => [r.routine, String(r.n), seconds(r.ours_s), seconds(r.numpy_1thread_s), ratio(r.ours_s, r.numpy_1thread_s), seconds(r.numpy_s), ratio(r.ours_s, r.numpy_s)]);
+  const header = ['routine', 'N', 'workers', 'ours', 'numpy 1 thread', 'ours/numpy 1t', 'numpy', 'ours/numpy'];
+  const body = rows.map((r) => [
+    r.routine,
+    String(r.n),
+    String(r.workers),
+    timeCell(r.ours_s, r.unit),
+    timeCell(r.numpy_1thread_s, r.unit),
+    ratio(r.ours_s, r.numpy_1thread_s),
+    timeCell(r.numpy_s, r.unit),
+    ratio(r.ours_s, r.numpy_s),
+  ]);
   const widths = header.map((h, c) => Math.max(h.length, ...body.map((row) => row[c].length)));
   const line = (cells: string[]): string => cells.map((cell, c) => (c < 1 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ');
   return [line(header), widths.map((w) => '-'.repeat(w)).join('  '), ...body.map(line)].join('\n');
@@ -63,7 +86,8 @@ async function main(): Promise<void> {
   const allRows: BenchmarkRow[] = [];
   for (const group of groups) {
     const result = await group.run({ sizes: args.sizes ?? [...group.defaultSizes], log: (line) => console.error(line) });
-    console.log(`\n${group.name} (best of several runs, wall clock; ours on Node ${process.versions.node})\n`);
+    const perSample = result.rows.some((r) => r.unit === 'sample') ? '; throughput rows: seconds per sample (samples per second)' : '';
+    console.log(`\n${group.name} (best of several runs, wall clock; ours on Node ${process.versions.node}${perSample})\n`);
     console.log(table(result.rows));
     for (const note of result.notes) console.log(`\n${note}`);
     allRows.push(...result.rows);
