@@ -17,10 +17,10 @@ pre { white-space: pre-wrap; word-break: break-word; margin: .4rem 0; }
 .failures li { margin-bottom: .4rem; } .failures code.replay { display: block; color: #555; }
 .filters { display: flex; gap: 1.5rem; align-items: center; margin: .5rem 0; }
 .table-wrap { overflow-x: auto; }
-table { border-collapse: collapse; width: 100%; }
+table { border-collapse: collapse; width: 100%; font-size: 13px; }
 th, td { border-bottom: 1px solid var(--line); padding: .3rem .4rem; text-align: left; vertical-align: top; }
 th { background: #f5f5f5; position: sticky; top: 0; }
-td.num { font-variant-numeric: tabular-nums; white-space: nowrap; }
+td.num { font-variant-numeric: tabular-nums; overflow-wrap: anywhere; min-width: 5em; }
 td.params { font-size: 12px; color: #444; }
 code.id { color: #555; font-size: 11px; }
 tr.state-fail { background: #fdecea; } tr.state-fault { background: #f3e5f5; }
