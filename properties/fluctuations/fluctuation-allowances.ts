@@ -21,7 +21,7 @@ import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
  */
 
 /** One-resolvent covariances (tracial). */
-export const RESOLVENT_COVARIANCE_CONSTANT = 4;
+export const RESOLVENT_COVARIANCE_CONSTANT = 5;
 /** Identity chains. */
 export const CHAIN_COVARIANCE_CONSTANT = 3;
 /** Weighted one-resolvent covariances (and the Monte Carlo comparison of weighted chains). */

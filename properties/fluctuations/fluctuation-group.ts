@@ -86,5 +86,7 @@ export function decorrelationGroup(ensemble: EnsembleSpec, size: number, setting
   const c = ensembleConstants(ensemble, small);
   const checks = mesoscopicChecks(book, ensemble, true);
   const counts = sampleCounts(c.field, settings.budget);
-  return fluctuationGroup(`fluctuations/${ensembleLabel(ensemble)}/N=${small}`, ensemble, book, checks, { spectral: counts.spectral, weighted: 0 });
+  // Named under the size it accompanies, so that it never collides with the main group of a run at N/4.
+  const id = `fluctuations/${ensembleLabel(ensemble)}/N=${size}/decorrelation/N=${small}`;
+  return fluctuationGroup(id, ensemble, book, checks, { spectral: counts.spectral, weighted: 0 });
 }

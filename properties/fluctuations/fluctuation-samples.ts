@@ -1,4 +1,4 @@
-import { EnsembleNotOffered, type ChainSpec } from '../../adapters/adapter.js';
+import { NotAvailable, type ChainSpec } from '../../adapters/adapter.js';
 import type { CheckContext } from '../../harness/check-group.js';
 import type { Complex } from '../../harness/numeric/complex.js';
 import { chainStatistics } from '../../harness/numeric/chain-statistics.js';
@@ -60,7 +60,7 @@ export class FluctuationSamples {
  * - else it offers a sampler: its matrices, with every statistic computed by the harness's engine
  *   from one decomposition per matrix (so the sampler is what is tested; the implementation's
  *   per-matrix routines are the identities suite's business);
- * - else nothing of it would be exercised, and the checks are skipped (EnsembleNotOffered).
+ * - else nothing of it would be exercised, and the checks are skipped (the group's skipReason; NotAvailable here).
  */
 export async function gatherFluctuationSamples(
   context: CheckContext,
@@ -101,7 +101,10 @@ export async function gatherFluctuationSamples(
       'sample_statistics',
     );
   }
-  if (!context.capabilities.has('sample')) throw new EnsembleNotOffered(ensembleLabel(ensemble));
+  if (!context.capabilities.has('sample')) {
+    // An adapter that declares sample_statistics without the method (one written before it existed).
+    throw new NotAvailable('the adapter declares sample_statistics but has no sampleStatistics method, and offers no sampler');
+  }
   const source = await matrixSource(context, key, ensemble, size, spectralCount, true);
   const chainsByTier = { spectral: book.chainsFor('spectral'), weighted: book.chainsFor('weighted') };
   let k = 0;
