@@ -39,7 +39,7 @@ describe('rmt-assay CLI', () => {
     ['a module that does not parse', ['check', '--module', join(fixtures, 'syntax-error-kernel.mjs')], /cannot load module/],
     ['a module that exports nothing usable', ['check', '--module', join(fixtures, 'empty-kernel.mjs')], /exports none of/],
     ['a program that cannot start', ['check', '--exec', 'no-such-program-rmt-assay', '--timeout', '5'], /cannot run/],
-    ['both --module and --exec', ['check', '--module', 'a.mjs', '--exec', 'b'], /not both/],
+    ['both --module and --exec', ['check', '--module', 'a.mjs', '--exec', 'b'], /not two/],
     ['no command', [], /name a command/],
   ];
   for (const [what, args, message] of badUsage) {
