@@ -9,7 +9,6 @@ import type { FluctuationCheck } from './fluctuation-check.js';
 import { designWeights, Z_A, Z_B, Z_C, Z_P } from './fluctuation-design.js';
 import { conjugated, type Statistic, type StatisticBook } from './statistic-book.js';
 
-
 const z = formatComplex;
 
 /**
