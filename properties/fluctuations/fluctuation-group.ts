@@ -4,6 +4,7 @@ import type { RunSettings } from '../../harness/run-settings.js';
 import type { PowerContext } from './detection-power.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { sampleCounts, SIXTH_ORDER_BUDGET } from './fluctuation-design.js';
+import { observedAgainstPredicted, standardisedFluctuations, withExhibit } from './fluctuation-exhibits.js';
 import { gatherFluctuationSamples } from './fluctuation-samples.js';
 import { linearStatisticChecks, meanCorrectionChecks } from './linear-statistic-checks.js';
 import { mesoscopicChecks } from './mesoscopic-checks.js';
@@ -47,7 +48,14 @@ export function fluctuationGroup(
       skipReason: fluctuationSkipReason,
       async run(context): Promise<CheckFinding[]> {
         const samples = await gatherFluctuationSamples(context, id, ensemble, book, counts.spectral, counts.weighted);
-        return checks.map((c) => c.evaluate(samples, power));
+        const findings = checks.map((c) => c.evaluate(samples, power));
+        // Pictures for the report: all of the group's checks observed against predicted on the
+        // first, and the Gaussian shape of the first statistic on the check that uses it.
+        const first = findings.findIndex((f) => f.state === 'measured');
+        if (first >= 0) findings[first] = withExhibit(findings[first], observedAgainstPredicted(checks, findings, `${id}: observed against predicted`));
+        const gaussian = checks.findIndex((c) => c.shows !== undefined);
+        if (gaussian >= 0) findings[gaussian] = withExhibit(findings[gaussian], standardisedFluctuations(samples, checks[gaussian].shows!));
+        return findings;
       },
     }),
   };

@@ -12,6 +12,7 @@ export function independenceCheck(book: StatisticBook): FluctuationCheck {
     name: 'independence/lag-1',
     title: 'consecutive samples are independent: lag-1 autocorrelation of Re Tr G(Z_A) within the white-noise band',
     statistical: true,
+    shows: x,
     evaluate: (samples, power) => independenceFinding(samples, x, power),
   };
 }

@@ -28,6 +28,10 @@ describe('fluctuations suite', () => {
     }
     const main = checks.find((c) => c.id === 'fluctuations/goe/N=80/tracial/-1+0.5i,-1+0.5i')!;
     expect(main.path).toMatch(/implementation's sample_statistics/);
+    // Pictures for the report: the group's checks observed against predicted, and a normal quantile plot.
+    expect(main.exhibit?.kind).toBe('observed-vs-predicted');
+    const quantiles = checks.find((c) => c.id === 'fluctuations/goe/N=80/independence/lag-1')!.exhibit;
+    expect(quantiles?.kind === 'normal-quantiles' && quantiles.standardised.length).toBe(500);
     // The reference engine offers no closed form for two general weights: those checks are skipped.
     expect(checks.filter((c) => c.state === 'skipped').map((c) => c.id)).toEqual(
       expect.arrayContaining(['fluctuations/covariance-function/goe/N=80/monte-carlo/two-weights']),
