@@ -13,10 +13,16 @@ export const PACKAGE_ROOT = join(import.meta.dirname, '..', '..');
 export function buildPrivateCli(name: string): { readonly bin: string; readonly remove: () => void } {
   const outDir = join(PACKAGE_ROOT, 'test-artifacts', `${name}-${process.pid}`);
   mkdirSync(outDir, { recursive: true });
-  execFileSync(process.execPath, [join(PACKAGE_ROOT, 'node_modules', 'typescript', 'bin', 'tsc'), '-p', join(PACKAGE_ROOT, 'tsconfig.json'), '--outDir', outDir], {
-    stdio: 'inherit',
-  });
-  return { bin: join(outDir, 'harness', 'cli', 'main.js'), remove: () => rmSync(outDir, { recursive: true, force: true }) };
+  const remove = () => rmSync(outDir, { recursive: true, force: true });
+  try {
+    execFileSync(process.execPath, [join(PACKAGE_ROOT, 'node_modules', 'typescript', 'bin', 'tsc'), '-p', join(PACKAGE_ROOT, 'tsconfig.json'), '--outDir', outDir], {
+      stdio: 'inherit',
+    });
+  } catch (error) {
+    remove();
+    throw error;
+  }
+  return { bin: join(outDir, 'harness', 'cli', 'main.js'), remove };
 }
 
 export interface CliRun {
