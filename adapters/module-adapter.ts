@@ -94,10 +94,19 @@ export class ModuleAdapter implements Adapter {
     } catch (error) {
       throw new ModuleLoadError(`cannot load module ${file}: ${(error as Error).message.split('\n')[0]}`);
     }
+    return ModuleAdapter.fromKernel(kernel, `module ${file}`, path);
+  }
+
+  /**
+   * An implementation given as an object with a module's exports: a TypeScript lab's own tests can
+   * pass its kernel without building a file first. `label` names it in errors; `name` in reports
+   * where the kernel has no `name` of its own.
+   */
+  static fromKernel(kernel: KernelModule, label = 'the kernel', name = 'in-memory kernel'): ModuleAdapter {
     if (!ROUTINES.some(([key]) => typeof kernel[key] === 'function')) {
-      throw new ModuleLoadError(`module ${file} exports none of ${ROUTINES.map(([key]) => key).join(', ')}`);
+      throw new ModuleLoadError(`${label} exports none of ${ROUTINES.map(([key]) => key).join(', ')}`);
     }
-    return new ModuleAdapter(kernel, path);
+    return new ModuleAdapter(kernel, name);
   }
 
   async describe(): Promise<AdapterDescription> {

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { AdapterFault } from '../../../adapters/adapter.js';
 import { runComparison } from '../../../harness/compare/run-comparison.js';
+import { resultToJson } from '../../../harness/reporters/json-reporter.js';
+import { validateRunResultJson } from '../../../harness/reporters/validate-run-result-json.js';
 import { randomStream } from '../../../harness/numeric/random-stream.js';
 import { sampleMatrix } from '../../../harness/numeric/sample-wigner.js';
 import { independentAdapter } from '../../support/independent-adapter.js';
@@ -27,6 +29,8 @@ describe('runComparison', () => {
     // 2 means + 3 covariances + 2 distributions per ensemble, all two-sample tests under Holm.
     expect(result.falseAlarmControl.statisticalChecks).toBe(14);
     expect(result.suites[0].checks.every((v) => v.replay.startsWith('npx rmt-assay compare --left reference --right reference'))).toBe(true);
+    // The JSON report of a comparison follows the published report schema.
+    expect(validateRunResultJson(JSON.parse(resultToJson(result)))).toEqual([]);
   });
 
   it('finds nothing that distinguishes an engine sharing no numerical code with the reference', async () => {
