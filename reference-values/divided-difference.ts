@@ -23,6 +23,12 @@ import { type Complex, ONE, abs, add, complex, div, mul, scale, sub } from '../h
  * τ → 0 only coincident points stay together, and those always pass), so the construction ends.
  * Between clusters the partial fractions amplify rounding by at most about (1/τ)^{k−1}.
  *
+ * Accuracy: the trapezoid error is below ε relative to the integrand, so the result carries the
+ * rounding error of Σ_j w_j f(ζ_j), about (k + 2)ε·Σ_j |w_j f(ζ_j)| (Higham 2002, Accuracy and
+ * Stability of Numerical Algorithms, §4.2). For functions singular along the whole segment, as the
+ * semicircle quantities are, that is a small multiple of ε times the result; for a function smooth
+ * on a larger scale L than the distance D to the segment it can exceed ε|result| by (L/D)^{k−1}.
+ *
  * References: L. N. Trefethen and J. A. C. Weideman, 2014, "The exponentially convergent trapezoidal
  * rule", SIAM Review 56(3), 385–458; the contour-integral (Hermite) form of divided differences is
  * common practice (e.g. C. de Boor, 2005, "Divided differences", Surv. Approx. Theory 1, 46–69;
