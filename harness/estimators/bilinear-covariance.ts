@@ -22,23 +22,44 @@ export interface CovarianceEstimate {
  * fourth moments and independent samples (the fluctuation suite checks the latter separately).
  */
 export function bilinearCovariance(x: Float64Array, y: Float64Array): CovarianceEstimate {
-  if (x.length !== y.length || x.length % 2 !== 0) throw new RangeError('bilinearCovariance: x and y need the same even length (complex interleaved)');
-  const n = x.length / 2;
+  return summedBilinearCovariance([[x, y]]);
+}
+
+/**
+ * Σ_j Cov(X_j, Y_j) over several pairs observed on the same K samples, with the delta-method
+ * standard error of the sum: the per-sample sums of centred products p_k = Σ_j (x_jk − x̄_j)(y_jk − ȳ_j)
+ * carry the dependence between the pairs, so SE = sd(p)/√K per component, as for one pair. Summing
+ * the covariances of statistics that are independent of each other (or nearly) averages their noise
+ * while their signals add.
+ */
+export function summedBilinearCovariance(pairs: ReadonlyArray<readonly [Float64Array, Float64Array]>): CovarianceEstimate {
+  if (pairs.length === 0) throw new RangeError('summedBilinearCovariance: at least one pair is needed');
+  const length = pairs[0][0].length;
+  for (const [x, y] of pairs) {
+    if (x.length !== length || y.length !== length || length % 2 !== 0) {
+      throw new RangeError('bilinearCovariance: x and y need the same even length (complex interleaved)');
+    }
+  }
+  const n = length / 2;
   if (n < 2) throw new RangeError('bilinearCovariance: at least two samples are needed');
-  const [xr, xi] = complexMean(x);
-  const [yr, yi] = complexMean(y);
-  // Welford on the two components of the centred products.
+  const means = pairs.map(([x, y]) => [...complexMean(x), ...complexMean(y)]);
+  // Welford on the two components of the summed centred products.
   let meanRe = 0;
   let meanIm = 0;
   let m2Re = 0;
   let m2Im = 0;
   for (let k = 0; k < n; k++) {
-    const ar = x[2 * k] - xr;
-    const ai = x[2 * k + 1] - xi;
-    const br = y[2 * k] - yr;
-    const bi = y[2 * k + 1] - yi;
-    const pr = ar * br - ai * bi;
-    const pi = ar * bi + ai * br;
+    let pr = 0;
+    let pi = 0;
+    pairs.forEach(([x, y], j) => {
+      const [xr, xi, yr, yi] = means[j];
+      const ar = x[2 * k] - xr;
+      const ai = x[2 * k + 1] - xi;
+      const br = y[2 * k] - yr;
+      const bi = y[2 * k + 1] - yi;
+      pr += ar * br - ai * bi;
+      pi += ar * bi + ai * br;
+    });
     const dr = pr - meanRe;
     const di = pi - meanIm;
     meanRe += dr / (k + 1);

@@ -1,7 +1,7 @@
 import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
 import { nonGaussianFactor } from './fluctuation-allowances.js';
-import { covarianceFinding } from './fluctuation-evidence.js';
+import { summedCovarianceFinding } from './fluctuation-evidence.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import type { Statistic } from './statistic-book.js';
 
@@ -30,11 +30,23 @@ export function covarianceCheck(
   expectedSource: string,
   allowance: Allowance,
 ): FluctuationCheck {
+  return summedCovarianceCheck(name, title, [[x, y]], expected, expectedSource, allowance);
+}
+
+/** Σ_j Cov(X_j, Y_j) against a reference value (pairs whose noises average while their signals add). */
+export function summedCovarianceCheck(
+  name: string,
+  title: string,
+  pairs: ReadonlyArray<readonly [Statistic, Statistic]>,
+  expected: Complex,
+  expectedSource: string,
+  allowance: Allowance,
+): FluctuationCheck {
   return {
     name,
     title,
     statistical: true,
     evaluate: (samples, power) =>
-      covarianceFinding(samples, x, y, { expected, expectedSource, allowanceFactor: allowance.factor, allowanceReason: allowance.reason }, power),
+      summedCovarianceFinding(samples, pairs, { expected, expectedSource, allowanceFactor: allowance.factor, allowanceReason: allowance.reason }, power),
   };
 }

@@ -58,8 +58,11 @@ export function sampleCounts(field: Field, budget: number): { spectral: number; 
  * The weights of the one-resolvent checks (real N×N matrices):
  * - D, traceless diagonal: +1 on the first ⌊N/2⌋ rows, −1 on the rest (⟨D²⟩ = 1, ⟨d(D)d(D)⟩ = 1);
  * - S = P + Pᵀ with P the cyclic shift: symmetric, zero diagonal (⟨S²⟩ = 2, no diagonal overlap);
- * - P, the cyclic shift itself: ⟨P²⟩ = 0 but ⟨PPᵀ⟩ = 1, so its covariance is β-dependent (0 for
- *   β = 2 at leading order, m1²m2²/(1 − m1m2) for β = 1), which tells a complex matrix with E h² ≠ 0;
+ * - P, the cyclic shift itself, and its powers P^k, k = 1 … SHIFT_POWERS: ⟨P^kP^k⟩ = 0 but
+ *   ⟨P^k(P^k)ᵀ⟩ = 1, so their covariances are β-dependent (0 for β = 2 at leading order,
+ *   m1²m2²/(1 − m1m2) for β = 1), which tells a complex matrix with E h² ≠ 0; Tr G(z)P^k for different
+ *   k see different entries (h_{i,i−k}), so the sum of their covariances has SHIFT_POWERS times the
+ *   signal and about √SHIFT_POWERS times the noise of one;
  * - A = 2I + D: a general weight, ⟨A⟩ = 2 (tracial part) plus the traceless D.
  */
 export interface DesignWeights {
@@ -67,6 +70,16 @@ export interface DesignWeights {
   readonly S: SquareMatrix;
   readonly P: SquareMatrix;
   readonly A: SquareMatrix;
+  /** P, P², …, P^SHIFT_POWERS (fewer when N is small: k < N/2, so that no two see the same entries). */
+  readonly shifts: readonly SquareMatrix[];
+}
+
+export const SHIFT_POWERS = 8;
+
+function cyclicShift(size: number, k: number): SquareMatrix {
+  const m = zeroMatrix('real', size);
+  for (let i = 0; i < size; i++) m.data[i * size + ((i + k) % size)] = 1;
+  return m;
 }
 
 export function designWeights(size: number): DesignWeights {
@@ -84,5 +97,7 @@ export function designWeights(size: number): DesignWeights {
     S.data[i * size + j] += 1;
     S.data[j * size + i] += 1;
   }
-  return { D, S, P, A };
+  const shifts = [P];
+  for (let k = 2; k <= SHIFT_POWERS && 2 * k < size; k++) shifts.push(cyclicShift(size, k));
+  return { D, S, P, A, shifts };
 }

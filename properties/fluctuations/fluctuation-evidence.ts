@@ -1,5 +1,5 @@
 import type { CheckFinding } from '../../harness/check-group.js';
-import { bilinearCovariance, complexMean } from '../../harness/estimators/bilinear-covariance.js';
+import { complexMean, summedBilinearCovariance } from '../../harness/estimators/bilinear-covariance.js';
 import { jointCumulant } from '../../harness/estimators/joint-cumulant.js';
 import { lagOneAutocorrelation } from '../../harness/estimators/lag-one-autocorrelation.js';
 import { abs, type Complex } from '../../harness/numeric/complex.js';
@@ -48,18 +48,28 @@ function powerScale(expected: Complex, natural: number): number {
  * deviation of the variance itself changes it by a factor 1 + O(allowanceFactor) only).
  */
 export function covarianceFinding(samples: FluctuationSamples, x: Statistic, y: Statistic, reference: Reference, power: PowerContext): CheckFinding {
-  const [cx, cy] = samples.columnsOnCommonSamples([x, y]);
-  const c = bilinearCovariance(cx, cy);
-  const natural = Math.sqrt(meanSquare(cx) * meanSquare(cy));
+  return summedCovarianceFinding(samples, [[x, y]], reference, power);
+}
+
+/** Σ_j Cov(X_j, Y_j) against the reference; the natural scale is Σ_j √(E|X_j − EX_j|² E|Y_j − EY_j|²). */
+export function summedCovarianceFinding(
+  samples: FluctuationSamples,
+  pairs: ReadonlyArray<readonly [Statistic, Statistic]>,
+  reference: Reference,
+  power: PowerContext,
+): CheckFinding {
+  const columns = pairs.map(([x, y]) => samples.columnsOnCommonSamples([x, y]) as [Float64Array, Float64Array]);
+  const c = summedBilinearCovariance(columns);
+  const natural = columns.reduce((sum, [cx, cy]) => sum + Math.sqrt(meanSquare(cx) * meanSquare(cy)), 0);
   const allowance = reference.allowanceFactor * natural;
   const evidence = toleranceTest({
     observed: c.estimate,
     expected: reference.expected,
     expectedSource: reference.expectedSource,
     standardError: c.standardError,
-    standardErrorMethod: `delta method: standard deviation of the centred products (X − X̄)(Y − Ȳ) over √K, K = ${c.count} independent samples, per component`,
+    standardErrorMethod: `delta method: standard deviation of the centred products (X − X̄)(Y − Ȳ)${pairs.length > 1 ? ', summed over the pairs,' : ''} over √K, K = ${c.count} independent samples, per component`,
     allowance,
-    allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × √(E|X − EX|² E|Y − EY|²) = ${allowance.toPrecision(3)})`,
+    allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × ${pairs.length > 1 ? 'Σ ' : ''}√(E|X − EX|² E|Y − EY|²) = ${allowance.toPrecision(3)})`,
     sampleCount: c.count,
   });
   return measured(samples, evidence, c.standardError, powerScale(reference.expected, natural), power);

@@ -1,10 +1,10 @@
-import { conj, formatComplex, type Complex } from '../../harness/numeric/complex.js';
+import { add, complex, conj, formatComplex, type Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
 import { identityChainCovariance } from '../../reference-values/chain-covariance.js';
 import { resolventCovariance } from '../../reference-values/resolvent-covariance.js';
 import { CHAIN_SOURCE, TRACIAL_SOURCE, WEIGHTED_SOURCE } from './covariance-sources.js';
 import { CHAIN_COVARIANCE_CONSTANT, RESOLVENT_COVARIANCE_CONSTANT, WEIGHTED_COVARIANCE_CONSTANT } from './fluctuation-allowances.js';
-import { covarianceCheck, finiteSizeAllowance } from './covariance-check.js';
+import { covarianceCheck, finiteSizeAllowance, summedCovarianceCheck } from './covariance-check.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { designWeights, Z_A, Z_B, Z_C, Z_P } from './fluctuation-design.js';
 import { conjugated, type Statistic, type StatisticBook } from './statistic-book.js';
@@ -78,11 +78,20 @@ export function weightedChecks(book: StatisticBook, c: EnsembleConstants): Fluct
     // D is real symmetric, so conj Tr G(z)D = Tr G(z̄)D: E|Y − EY|² against the (z, z̄) value.
     ['E|D@Z_A|²', D(Z_A), conjugated(D(Z_A)), resolventCovariance(Z_A, w.D, conj(Z_A), w.D, c), 'E|Tr G(z)D − E|², traceless diagonal weight'],
     ['S@Z_A,S@conj Z_B', book.weighted(Z_A, 'S', w.S), book.weighted(conj(Z_B), 'S', w.S), resolventCovariance(Z_A, w.S, conj(Z_B), w.S, c), 'zero-diagonal symmetric weight S = P + Pᵀ'],
-    ['P@Z_P,P@Z_P', book.weighted(Z_P, 'P', w.P), book.weighted(Z_P, 'P', w.P), resolventCovariance(Z_P, w.P, Z_P, w.P, c), 'cyclic shift P: ⟨P²⟩ = 0, ⟨PPᵀ⟩ = 1, so the value depends on β (0 for β = 2)'],
     ['A@Z_A,A@Z_B', book.weighted(Z_A, 'A', w.A), book.weighted(Z_B, 'A', w.A), resolventCovariance(Z_A, w.A, Z_B, w.A, c), 'general weight A = 2I + D: ⟨A⟩² times the tracial part plus the traceless part'],
     ['I@Z_A,D@Z_B', book.resolvent(Z_A), D(Z_B), resolventCovariance(Z_A, null, Z_B, w.D, c), 'tracial against traceless: asymptotically uncorrelated'],
   ];
-  return cases.map(([name, x, y, expected, what]) =>
+  const shifted = w.shifts.map((shift, j) => book.weighted(Z_P, `P^${j + 1}`, shift));
+  const shiftExpected = w.shifts.reduce((sum, shift) => add(sum, resolventCovariance(Z_P, shift, Z_P, shift, c)), complex(0));
+  const shifts = summedCovarianceCheck(
+    `weighted/Σ P^k@Z_P`,
+    `Σ_{k=1..${w.shifts.length}} Cov(Tr G(${z(Z_P)})P^k, Tr G(${z(Z_P)})P^k), P the cyclic shift: ⟨(P^k)²⟩ = 0, ⟨P^k(P^k)ᵀ⟩ = 1, so the value depends on β (0 for β = 2; it sees E h² ≠ 0)`,
+    shifted.map((x) => [x, x] as const),
+    shiftExpected,
+    WEIGHTED_SOURCE,
+    finiteSizeAllowance(WEIGHTED_COVARIANCE_CONSTANT, c, book.size),
+  );
+  const single = cases.map(([name, x, y, expected, what]) =>
     covarianceCheck(
       `weighted/${name}`,
       `Cov(${x.label}, ${y.label}): ${what}`,
@@ -93,4 +102,5 @@ export function weightedChecks(book: StatisticBook, c: EnsembleConstants): Fluct
       finiteSizeAllowance(WEIGHTED_COVARIANCE_CONSTANT, c, book.size),
     ),
   );
+  return [...single, shifts];
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bilinearCovariance } from '../../../harness/estimators/bilinear-covariance.js';
+import { bilinearCovariance, summedBilinearCovariance } from '../../../harness/estimators/bilinear-covariance.js';
 import { randomStream } from '../../../harness/numeric/random-stream.js';
 
 function interleaved(re: number[], im: number[] = re.map(() => 0)): Float64Array {
@@ -57,6 +57,24 @@ describe('bilinearCovariance', () => {
     expect(Math.abs(mean)).toBeLessThan(0.25);
     expect(sd).toBeGreaterThan(0.85);
     expect(sd).toBeLessThan(1.15);
+  });
+
+  it('sums covariances exactly, with the error of the summed products (independent pairs: errors add in quadrature)', () => {
+    const s = randomStream(8, 'summed-covariance', 0);
+    const column = () => new Float64Array(2000).map(() => s.nextNormal());
+    const [a, b, c, d] = [column(), column(), column(), column()];
+    const sum = summedBilinearCovariance([
+      [a, b],
+      [c, d],
+    ]);
+    const one = bilinearCovariance(a, b);
+    const two = bilinearCovariance(c, d);
+    expect(sum.estimate.re).toBeCloseTo(one.estimate.re + two.estimate.re, 13);
+    expect(sum.estimate.im).toBeCloseTo(one.estimate.im + two.estimate.im, 13);
+    // Independent pairs: the variance of the summed products is the sum of the two, up to sampling.
+    const quadrature = Math.hypot(one.standardError.re, two.standardError.re);
+    expect(sum.standardError.re / quadrature).toBeGreaterThan(0.9);
+    expect(sum.standardError.re / quadrature).toBeLessThan(1.1);
   });
 
   it('rejects mismatched or too short input', () => {
