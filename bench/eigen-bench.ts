@@ -1,6 +1,7 @@
 import { eigenpairs, eigenvalues } from '../harness/numeric/eigen.js';
 import type { SquareMatrix } from '../harness/numeric/square-matrix.js';
 import { tridiagonalEigenvalues } from '../harness/numeric/tridiagonal-eigenvalues.js';
+import { tridiagonaliseReal } from '../harness/numeric/tridiagonalise-real.js';
 import { tridiagonaliseRealBlocked } from '../harness/numeric/tridiagonalise-real-blocked.js';
 import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult, BenchmarkRow } from './benchmark-group.js';
 import { bestOf } from './best-of.js';
@@ -10,8 +11,9 @@ import { runNumpyPeer } from './numpy-peer.js';
  * Eigenvalues and eigenpairs of dense real symmetric matrices: ours (harness/numeric/eigen.ts)
  * against numpy.linalg.eigvalsh / eigh (LAPACK dsyevd and friends through numpy's BLAS), run
  * from python3 in the same benchmark run, once pinned to one thread and once as it comes
- * (numpy-peer.ts). A third row times the blocked reduction (tridiagonalise-real-blocked.ts) with
- * the same QL, against the same numpy eigvalsh, so the choice of default can be re-measured.
+ * (numpy-peer.ts). Two more rows time the alternatives to the default reduction with the same QL,
+ * against the same numpy eigvalsh, so the choice of default can be re-measured: the fused sweep in
+ * scalar code (no WebAssembly SIMD kernel) and the blocked reduction (tridiagonalise-real-blocked.ts).
  */
 export const eigenBench: BenchmarkGroup = {
   name: 'eigen',
@@ -37,6 +39,7 @@ async function runEigenBench(options: BenchmarkOptions): Promise<BenchmarkResult
   notes.push(`numpy, as it comes: ${free.description}`);
   // Warm the JIT on a small problem before timing.
   eigenpairs(symmetricTestMatrix(64, 1));
+  scalarEigenvalues(symmetricTestMatrix(64, 1));
   blockedEigenvalues(symmetricTestMatrix(64, 1));
   const rows: BenchmarkRow[] = [];
   const row = (routine: string, n: number, ours: number, peer: string): BenchmarkRow => ({
@@ -51,21 +54,29 @@ async function runEigenBench(options: BenchmarkOptions): Promise<BenchmarkResult
   for (const n of options.sizes) {
     const m = symmetricTestMatrix(n, n);
     const r = repetitions(n);
-    options.log(`eigen: N = ${n}, eigenvalues ×${r.values} (default and blocked reduction, alternating)`);
+    options.log(`eigen: N = ${n}, eigenvalues ×${r.values} (default, scalar sweep and blocked reduction, alternating)`);
     let values = Number.POSITIVE_INFINITY;
+    let scalar = Number.POSITIVE_INFINITY;
     let blocked = Number.POSITIVE_INFINITY;
-    // Alternate the two so that a change in the machine's load hits both alike.
+    // Alternate the three so that a change in the machine's load hits them alike.
     for (let k = 0; k < r.values; k++) {
       values = Math.min(values, bestOf(1, () => eigenvalues(m)));
+      scalar = Math.min(scalar, bestOf(1, () => scalarEigenvalues(m)));
       blocked = Math.min(blocked, bestOf(1, () => blockedEigenvalues(m)));
     }
     options.log(`eigen: N = ${n}, eigenpairs ×${r.pairs}`);
     const pairs = bestOf(r.pairs, () => eigenpairs(m));
     rows.push(row('eigenvalues', n, values, 'eigenvalues'));
+    rows.push(row('eigenvalues, scalar sweep', n, scalar, 'eigenvalues'));
     rows.push(row('eigenvalues, blocked reduction', n, blocked, 'eigenvalues'));
     rows.push(row('eigenpairs', n, pairs, 'eigenpairs'));
   }
   return { rows, notes };
+}
+
+/** The fused reduction without the SIMD kernel, then the same root-free QL as eigenvalues(). */
+function scalarEigenvalues(m: SquareMatrix): Float64Array {
+  return tridiagonalEigenvalues(tridiagonaliseReal(m.data, m.size, false, 'scalar').tridiagonal);
 }
 
 /** The blocked reduction (default panel width) followed by the same root-free QL as eigenvalues(). */

@@ -20,7 +20,8 @@ import { tridiagonaliseReal } from './tridiagonalise-real.js';
  * implicit QL with Wilkinson shifts: root-free for eigenvalues alone (tridiagonal-eigenvalues.ts,
  * after LAPACK dsterf), with Givens rotations accumulated onto the Householder factor for
  * eigenvectors (orthogonal-factor.ts and tridiagonal-ql.ts, after LAPACK dorgtr and dsteqr;
- * Numerical Recipes tred2/tqli).
+ * Numerical Recipes tred2/tqli). The real reduction's inner loop runs as a WebAssembly SIMD kernel
+ * where the engine has one (fused-sweep-kernel.ts), else in scalar code.
  *
  * Accuracy (Golub and Van Loan 2013, §8.3.5): the computed eigenvalues are exact for a matrix
  * within O(N ε ‖A‖) of A, so each has absolute error O(N ε ‖A‖); the eigenvectors satisfy

@@ -24,14 +24,14 @@ import type { RealReduction } from './tridiagonalise-real.js';
  * values of index j), so A[j, r] −= Σ_q P[r, q] Q[j, q] is a dot product of two contiguous rows;
  * the update computes it for 4 × 4 tiles of (r, j) with sixteen accumulators.
  *
- * Status: not the default. On Node 20 (V8, scalar floating point, no SIMD) every kernel here — the
- * symmetric product, the tiled update — runs at about the same rate as the unblocked fused sweep
- * of tridiagonalise-real.ts (≈ 3.3 GFlop/s measured on this project's machine), so the blocked
- * form, with the same (4/3)N³ flops plus the panel's O(N²·nb) corrections, took 1.3–1.4× the CPU
- * time of the fused sweep at N = 1000 and 2000 (best of 5, both in one process, alternating).
- * Blocking pays where memory traffic, not the scalar flop rate, is the limit (LAPACK with a
- * vectorised BLAS); `npm run bench` times both in the same run ('eigenvalues, blocked reduction'),
- * so the choice can be re-measured on another engine or machine.
+ * Status: not the default. On Node 20 (V8, scalar floating point) every kernel here — the
+ * symmetric product, the tiled update — runs at about the rate of the scalar fused sweep of
+ * tridiagonalise-real.ts (≈ 3.3 GFlop/s measured on this project's machine), so the blocked form,
+ * with the same (4/3)N³ flops plus the panel's O(N²·nb) corrections, took 1.3–1.4× the CPU time of
+ * that scalar sweep at N = 1000 and 2000 (best of 5, both in one process, alternating), and about
+ * 3× the time of the default SIMD sweep. Blocking pays where memory traffic, not the flop rate, is
+ * the limit (LAPACK with a vectorised BLAS); `npm run bench` times it in the same run as the
+ * default ('eigenvalues, blocked reduction'), so the choice can be re-measured.
  *
  * Accuracy: backward stable, like the unblocked reduction (the blocked form is an exact
  * rearrangement of the same reflectors; Golub and Van Loan 2013, §8.3.1 and §5.2.3).

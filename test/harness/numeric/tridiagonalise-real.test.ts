@@ -3,25 +3,36 @@ import { eigenvalues } from '../../../harness/numeric/eigen.js';
 import { transposedRealFactor } from '../../../harness/numeric/orthogonal-factor.js';
 import type { SquareMatrix } from '../../../harness/numeric/square-matrix.js';
 import { tridiagonalEigenvalues } from '../../../harness/numeric/tridiagonal-eigenvalues.js';
+import { fusedSweepKernel } from '../../../harness/numeric/fused-sweep-kernel.js';
+import { tridiagonaliseReal, type RealReduction } from '../../../harness/numeric/tridiagonalise-real.js';
 import { tridiagonaliseRealBlocked } from '../../../harness/numeric/tridiagonalise-real-blocked.js';
 import { gradedHermitian, oneNorm, randomHermitian } from './spectral-fixtures.js';
 
 /**
- * The blocked reduction (dsytrd/dlatrd form) by LAPACK's normalised ratios for a tridiagonal
- * reduction, as in its dsyt21 test routine (LAPACK 3.x test suite; from memory): with Q the product
- * of the stored reflectors,
+ * The three real tridiagonal reductions — the fused sweep with its WebAssembly SIMD kernel (the
+ * default), the same sweep in scalar code, and the blocked dsytrd/dlatrd form — by LAPACK's
+ * normalised ratios for a tridiagonal reduction, as in its dsyt21 test routine (LAPACK 3.x test
+ * suite; from memory): with Q the product of the stored reflectors,
  *   ‖A − Q T Qᵀ‖₁/(N ‖A‖₁ ε) and ‖QᵀQ − I‖₁/(N ε),
  * both O(1) for a backward-stable reduction, held against 50 (the threshold of eigen.test.ts).
- * Sizes are chosen around the panel width nb (nb − 1, nb, nb + 1, 2nb ± 1, 2nb + 2, and the last
- * two columns falling in a panel of their own or not), so every panel boundary case runs.
- * The eigenvalues of T must also agree with the default path's (eigen.ts) within 50 N ε ‖A‖₁.
+ * Sizes are chosen around each variant's block boundaries: the SIMD kernel's blocks of 4 rows with
+ * 0–3 rows left over and an odd or even number of columns, the scalar sweep's blocks of 8, and the
+ * blocked form's panel width nb (nb − 1, nb, nb + 1, 2nb ± 1, 2nb + 2, the last two columns in a
+ * panel of their own or not). The eigenvalues of T must also agree with eigen.ts within 50 N ε ‖A‖₁.
  */
+type Reduce = (a: Float64Array, n: number, keepReflectors: boolean) => RealReduction;
+
+const VARIANTS: readonly [string, Reduce][] = [
+  ['fused, SIMD kernel', (a, n, keep) => tridiagonaliseReal(a, n, keep, 'simd')],
+  ['fused, scalar', (a, n, keep) => tridiagonaliseReal(a, n, keep, 'scalar')],
+  ['blocked nb=32', (a, n, keep) => tridiagonaliseRealBlocked(a, n, keep)],
+];
 const THRESHOLD = 50;
 const EPS = Number.EPSILON;
 
-function reductionRatios(m: SquareMatrix, panelWidth: number): { residual: number; orthogonality: number } {
+function reductionRatios(m: SquareMatrix, reduce: Reduce): { residual: number; orthogonality: number } {
   const n = m.size;
-  const reduction = tridiagonaliseRealBlocked(m.data, n, true, panelWidth);
+  const reduction = reduce(m.data, n, true);
   const reflectors = reduction.reflectors ?? new Float64Array(0);
   // Row r of qt is column r of Q.
   const qt = n >= 3 ? transposedRealFactor(reflectors, reduction.tau, n) : identity(n);
@@ -73,53 +84,68 @@ function identity(n: number): Float64Array {
   return out;
 }
 
-function expectReduction(label: string, m: SquareMatrix, panelWidth: number): void {
-  const { residual, orthogonality } = reductionRatios(m, panelWidth);
-  expect(residual, `${label} nb=${panelWidth}: ‖A − QTQᵀ‖/(N‖A‖ε)`).toBeLessThan(THRESHOLD);
-  expect(orthogonality, `${label} nb=${panelWidth}: ‖QᵀQ − I‖/(Nε)`).toBeLessThan(THRESHOLD);
-  const values = tridiagonalEigenvalues(tridiagonaliseRealBlocked(m.data, m.size, false, panelWidth).tridiagonal);
+function expectReduction(label: string, m: SquareMatrix, variant: string, reduce: Reduce): void {
+  const { residual, orthogonality } = reductionRatios(m, reduce);
+  expect(residual, `${variant}, ${label}: ‖A − QTQᵀ‖/(N‖A‖ε)`).toBeLessThan(THRESHOLD);
+  expect(orthogonality, `${variant}, ${label}: ‖QᵀQ − I‖/(Nε)`).toBeLessThan(THRESHOLD);
+  const values = tridiagonalEigenvalues(reduce(m.data, m.size, false).tridiagonal);
   const reference = eigenvalues(m);
   const tolerance = THRESHOLD * Math.max(m.size, 1) * EPS * Math.max(oneNorm(m), Number.MIN_VALUE);
   for (let k = 0; k < m.size; k++) {
     const diff = Math.abs(values[k] - reference[k]);
-    expect(diff, `${label} nb=${panelWidth}: λ[${k}] blocked ${values[k]}, default ${reference[k]}, tolerance ${tolerance}`).toBeLessThanOrEqual(tolerance);
+    expect(diff, `${variant}, ${label}: λ[${k}] ${values[k]}, eigen.ts ${reference[k]}, tolerance ${tolerance}`).toBeLessThanOrEqual(tolerance);
   }
 }
 
-describe('blocked Householder reduction (dsytrd/dlatrd form)', () => {
-  it('panel boundaries: sizes around nb and 2nb, for nb = 1, 2, 3, 8', () => {
+function blockedWith(panelWidth: number): Reduce {
+  return (a, n, keep) => tridiagonaliseRealBlocked(a, n, keep, panelWidth);
+}
+
+describe('real tridiagonal reductions: block boundaries', () => {
+  it('the SIMD kernel is available on this engine (else the default silently runs the scalar sweep)', () => {
+    expect(fusedSweepKernel()).not.toBeNull();
+  });
+
+  it('fused sweeps, SIMD and scalar: every N from 1 to 40, and 63 … 66', () => {
+    for (const [variant, reduce] of VARIANTS.slice(0, 2)) {
+      for (const n of [...Array.from({ length: 40 }, (_, k) => k + 1), 63, 64, 65, 66]) expectReduction(`random N=${n}`, randomHermitian('real', n, 3000 + n), variant, reduce);
+    }
+  });
+
+  it('blocked: sizes around nb and 2nb, for nb = 1, 2, 3, 8', () => {
     for (const nb of [1, 2, 3, 8]) {
       for (const n of new Set([1, 2, 3, 4, nb - 1, nb, nb + 1, nb + 2, 2 * nb - 1, 2 * nb, 2 * nb + 1, 2 * nb + 2, 3 * nb + 5])) {
-        if (n >= 1) expectReduction(`random N=${n}`, randomHermitian('real', n, 1000 * nb + n), nb);
+        if (n >= 1) expectReduction(`random N=${n}`, randomHermitian('real', n, 1000 * nb + n), `blocked nb=${nb}`, blockedWith(nb));
       }
     }
   });
 
-  it('the default panel width (32) at N = 31, 32, 33, 65 and 70', () => {
-    for (const n of [31, 32, 33, 65, 70]) expectReduction(`random N=${n}`, randomHermitian('real', n, 2000 + n), 32);
+  it('blocked: the default panel width (32) at N = 31, 32, 33, 65 and 70', () => {
+    for (const n of [31, 32, 33, 65, 70]) expectReduction(`random N=${n}`, randomHermitian('real', n, 2000 + n), 'blocked nb=32', blockedWith(32));
   });
+});
 
-  it('graded (24 orders of magnitude), already tridiagonal (τ = 0) and zero matrices', () => {
-    expectReduction('graded N=25', gradedHermitian('real', 25, 7, 12), 4);
-    const n = 12;
-    const data = new Float64Array(n * n);
-    for (let i = 0; i < n; i++) {
-      data[i * n + i] = Math.cos(i);
-      if (i > 0) data[i * n + i - 1] = data[(i - 1) * n + i] = 0.5;
-    }
-    expectReduction('tridiagonal N=12', { field: 'real', size: n, data }, 5);
-    const zero = tridiagonaliseRealBlocked(new Float64Array(36), 6, false, 2);
-    expect(Array.from(zero.tridiagonal.diagonal)).toEqual([0, 0, 0, 0, 0, 0]);
-    expect(Array.from(zero.tridiagonal.offDiagonal)).toEqual([0, 0, 0, 0, 0]);
-  });
+describe('real tridiagonal reductions: special inputs', () => {
+  for (const [variant, reduce] of VARIANTS) {
+    it(`${variant}: graded (24 orders of magnitude), already tridiagonal (τ = 0), zero, and near-underflow matrices`, () => {
+      expectReduction('graded N=25', gradedHermitian('real', 25, 7, 12), variant, reduce);
+      const n = 12;
+      const data = new Float64Array(n * n);
+      for (let i = 0; i < n; i++) {
+        data[i * n + i] = Math.cos(i);
+        if (i > 0) data[i * n + i - 1] = data[(i - 1) * n + i] = 0.5;
+      }
+      expectReduction('tridiagonal N=12', { field: 'real', size: n, data }, variant, reduce);
+      const zero = reduce(new Float64Array(36), 6, false);
+      expect(Array.from(zero.tridiagonal.diagonal)).toEqual([0, 0, 0, 0, 0, 0]);
+      expect(Array.from(zero.tridiagonal.offDiagonal)).toEqual([0, 0, 0, 0, 0]);
+      // Entries near the underflow threshold take dlarfg's rescaling.
+      const m = randomHermitian('real', 20, 77);
+      expectReduction('tiny N=20', { field: 'real', size: 20, data: m.data.map((x) => x * 1e-300) }, variant, reduce);
+    });
+  }
 
-  it('entries near the underflow threshold take dlarfg’s rescaling and still reduce stably', () => {
-    const m = randomHermitian('real', 20, 77);
-    const tiny: SquareMatrix = { field: 'real', size: 20, data: m.data.map((x) => x * 1e-300) };
-    expectReduction('tiny N=20', tiny, 6);
-  });
-
-  it('reads only the lower triangle and rejects a bad panel width', () => {
+  it('blocked: reads only the lower triangle and rejects a bad panel width', () => {
     const m = randomHermitian('real', 10, 5);
     const scrambled = Float64Array.from(m.data);
     for (let i = 0; i < 10; i++) for (let j = i + 1; j < 10; j++) scrambled[i * 10 + j] = 1e300;
