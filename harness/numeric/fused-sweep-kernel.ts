@@ -39,10 +39,12 @@ export interface FusedSweepWorkspace {
 
 export interface FusedSweepKernel {
   /**
-   * Arrays of order N in the kernel's memory (contents unspecified). Views from an earlier call
-   * become unusable when memory has to grow; take fresh ones for each reduction.
+   * Arrays of order N in the kernel's memory (contents unspecified), or null when they do not fit
+   * (32-bit WebAssembly memory ends at 4 GiB: N above about 32 000) or memory cannot grow. Views
+   * from an earlier call become unusable when memory grows; take fresh ones for each reduction.
+   * The memory keeps the size of the largest order reduced so far (16 MB for N = 2000).
    */
-  workspace(n: number): FusedSweepWorkspace;
+  workspace(n: number): FusedSweepWorkspace | null;
   /** The rectangles for blocks starting at `first` (see above); all arrays from the current workspace. */
   rectangles(n: number, first: number, firstOffset: number, p: Float64Array, v: Float64Array, w: Float64Array, u: Float64Array, q: Float64Array): void;
 }
@@ -56,6 +58,8 @@ export function fusedSweepKernel(): FusedSweepKernel | null {
 }
 
 const PAGE = 65536;
+/** 4 GiB in 64 KiB pages, the most a 32-bit WebAssembly memory can have (spec §2.5.4, limits). */
+const MAX_PAGES = 65536;
 
 /**
  * The part of the WebAssembly JavaScript API used here (W3C WebAssembly JavaScript Interface);
@@ -64,7 +68,7 @@ const PAGE = 65536;
  */
 interface WebAssemblyApi {
   validate(bytes: Uint8Array): boolean;
-  Memory: new (descriptor: { initial: number }) => { readonly buffer: ArrayBuffer; grow(pages: number): number };
+  Memory: new (descriptor: { initial: number; maximum: number }) => { readonly buffer: ArrayBuffer; grow(pages: number): number };
   Module: new (bytes: Uint8Array) => object;
   Instance: new (module: object, imports: object) => { readonly exports: Record<string, unknown> };
 }
@@ -74,7 +78,7 @@ function buildKernel(): FusedSweepKernel | null {
   if (wasm === undefined) return null;
   const bytes = wasmModule([{ name: 'rectangles', ...rectanglesFunction(FUSED_SWEEP_ROWS) }]);
   if (!wasm.validate(bytes)) return null;
-  const memory = new wasm.Memory({ initial: 1 });
+  const memory = new wasm.Memory({ initial: 1, maximum: MAX_PAGES });
   const instance = new wasm.Instance(new wasm.Module(bytes), { env: { memory } });
   const run = instance.exports.rectangles as (...args: number[]) => void;
   return {
@@ -85,7 +89,15 @@ function buildKernel(): FusedSweepKernel | null {
       const doubles = 2 * Math.ceil(packedLength / 2) + 4 * stride;
       const needed = Math.ceil((8 * doubles) / PAGE);
       const pages = memory.buffer.byteLength / PAGE;
-      if (needed > pages) memory.grow(needed - pages);
+      if (needed > MAX_PAGES) return null;
+      if (needed > pages) {
+        try {
+          memory.grow(needed - pages);
+        } catch {
+          // The engine could not reserve the memory (RangeError): the caller's scalar path allocates its own.
+          return null;
+        }
+      }
       const buffer = memory.buffer;
       const packed = new Float64Array(buffer, 0, packedLength);
       const base = 2 * Math.ceil(packedLength / 2);

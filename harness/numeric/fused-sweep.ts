@@ -11,12 +11,14 @@ export function packedRowOffset(n: number, i: number): number {
 const rowOffset = packedRowOffset;
 
 /**
- * The packed array and four vectors for a reduction of order N: in the kernel's memory when there
- * is a kernel (so it works on them in place), else fresh arrays.
+ * The packed array and four vectors for a reduction of order N, and the kernel to sweep them with:
+ * in the kernel's memory when there is a kernel and the arrays fit there (so it works on them in
+ * place), else fresh arrays and no kernel.
  */
-export function sweepWorkspace(n: number, kernel: FusedSweepKernel | null): FusedSweepWorkspace {
-  if (kernel !== null) return kernel.workspace(n);
-  return { packed: new Float64Array((n * (n + 1)) / 2), vectors: Array.from({ length: 4 }, () => new Float64Array(n)) };
+export function sweepWorkspace(n: number, kernel: FusedSweepKernel | null): { workspace: FusedSweepWorkspace; kernel: FusedSweepKernel | null } {
+  const inKernel = kernel?.workspace(n) ?? null;
+  if (inKernel !== null) return { workspace: inKernel, kernel };
+  return { workspace: { packed: new Float64Array((n * (n + 1)) / 2), vectors: Array.from({ length: 4 }, () => new Float64Array(n)) }, kernel: null };
 }
 
 /**

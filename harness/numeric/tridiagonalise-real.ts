@@ -61,8 +61,7 @@ export function tridiagonaliseReal(a: Float64Array, n: number, keepReflectors: b
     }
     return result;
   }
-  const kernel = sweep === 'simd' ? fusedSweepKernel() : null;
-  const workspace = sweepWorkspace(n, kernel);
+  const { workspace, kernel } = sweepWorkspace(n, sweep === 'simd' ? fusedSweepKernel() : null);
   const p = workspace.packed;
   for (let i = 0; i < n; i++) for (let j = 0; j <= i; j++) p[rowOffset(n, j) + i] = a[i * n + j];
   const [first, second, w, q] = workspace.vectors;
