@@ -4,6 +4,7 @@ import { eigenpairs, eigenvalues } from './eigen.js';
 import { eigenbasisDiagonal } from './eigenbasis-diagonal.js';
 import { eigenbasisMatrix } from './eigenbasis-matrix.js';
 import { resolventDiagonal } from './resolvent-trace.js';
+import { sparseEigenbasisDiagonal, sparseEntries } from './sparse-eigenbasis-diagonal.js';
 import type { SpectralDecomposition } from './spectral-decomposition.js';
 import type { SquareMatrix } from './square-matrix.js';
 import { weightKind, type WeightKind } from './weight-kind.js';
@@ -20,14 +21,17 @@ interface WeightSeen {
   full?: Float64Array;
 }
 
+/** Up to this many non-zeros per row on average, a weight's eigenbasis diagonal is summed sparsely. */
+const SPARSE_ROW_LIMIT = 4;
+
 /**
  * The normalised traces ⟨G(z1)A1 ⋯ G(zk)Ak⟩ of several chains of one matrix, from one
  * eigendecomposition shared by all of them (THEORY.md, "Conventions"; the empty chain gives ⟨I⟩ = 1).
  *
  * Method: the spectrum alone when every weight is the identity, since then the chain is
  * (1/N) Σ_i Π_j 1/(λ_i − z_j); otherwise eigenpairs (eigen.ts) once, and per distinct weight at
- * most one eigenbasis diagonal (k = 1, or k = 2 with an identity partner; O(N²) for a diagonal or
- * sparse weight) and one eigenbasis matrix B = V*AV (k = 2 with two general weights, then
+ * most one eigenbasis diagonal (k = 1, or k = 2 with an identity partner; summed over the non-zeros
+ * for a sparse weight, sparse-eigenbasis-diagonal.ts, else eigenbasis-diagonal.ts) and one eigenbasis matrix B = V*AV (k = 2 with two general weights, then
  * Tr(D1B1D2B2)/N = (1/N) Σ_{r,s} (D1)_r (B1)_rs (D2)_s (B2)_sr in O(N²)). Longer chains with
  * general weights go to `chainTrace` (O(kN³)). Accuracy as in chain-trace.ts and resolvent-trace.ts.
  */
@@ -49,7 +53,14 @@ export function chainStatistics(matrix: SquareMatrix, chains: readonly ChainOfRe
   const needsVectors = chains.some((c) => c.weights.some((w) => kindOf(w).kind !== 'identity'));
   const decomposition: SpectralDecomposition | null = needsVectors ? eigenpairs(matrix) : null;
   const values = decomposition?.values ?? eigenvalues(matrix);
-  const diagonalOf = (w: SquareMatrix) => (kindOf(w).diagonal ??= eigenbasisDiagonal(decomposition!, w));
+  const diagonalOf = (w: SquareMatrix) => {
+    const seen = kindOf(w);
+    if (seen.diagonal === undefined) {
+      const sparse = sparseEntries(w, SPARSE_ROW_LIMIT * w.size);
+      seen.diagonal = sparse === null ? eigenbasisDiagonal(decomposition!, w) : sparseEigenbasisDiagonal(decomposition!, sparse);
+    }
+    return seen.diagonal;
+  };
   const fullOf = (w: SquareMatrix) => (kindOf(w).full ??= eigenbasisMatrix(decomposition!, w));
 
   return chains.map((chain) => {
