@@ -38,7 +38,7 @@ import { periodicFourierCoefficients, periodicSynthesis } from './periodic-fouri
  * behaviour in 1/x, e.g. Gaussian, rational; Trefethen and Weideman 2014, SIAM Rev. 56). In the same
  * variables ∫ f dx = ∫ F(φ) (s/2) sec²(φ/2) dφ and ∫ f′² dx = ∫ F′(φ)² (2/s) cos²(φ/2) dφ, F′ by
  * spectral differentiation. M doubles from 256 until D and the two integrals change by less than
- * 1e-13 relative (at most M = 2^20; otherwise a RangeError). Choose c and s near the centre and
+ * 1e-13 relative (at most M = 2^17; otherwise a RangeError). Choose c and s near the centre and
  * width of f (defaults 0 and 1).
  *
  * References: Y. He and A. Knowles, 2017, "Mesoscopic eigenvalue statistics of Wigner matrices",
@@ -64,7 +64,7 @@ export interface DouglasIntegrals {
 }
 
 const FIRST_NODES = 256;
-const MAX_NODES = 1 << 20;
+const MAX_NODES = 1 << 17;
 const RELATIVE_TOLERANCE = 1e-13;
 
 function estimate(f: (x: number) => number, M: number, c: number, s: number): DouglasIntegrals {
