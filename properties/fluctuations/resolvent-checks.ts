@@ -3,7 +3,7 @@ import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
 import { identityChainCovariance } from '../../reference-values/chain-covariance.js';
 import { resolventCovariance } from '../../reference-values/resolvent-covariance.js';
 import { CHAIN_SOURCE, TRACIAL_SOURCE, WEIGHTED_SOURCE } from './covariance-sources.js';
-import { CHAIN_COVARIANCE_CONSTANT, RESOLVENT_COVARIANCE_CONSTANT, WEIGHTED_COVARIANCE_CONSTANT } from './fluctuation-allowances.js';
+import { CHAIN_COVARIANCE_CONSTANT, RESOLVENT_COVARIANCE_CONSTANT, SHIFT_COVARIANCE_CONSTANT, WEIGHTED_COVARIANCE_CONSTANT } from './fluctuation-allowances.js';
 import { covarianceCheck, finiteSizeAllowance, summedCovarianceCheck } from './covariance-check.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { designWeights, Z_A, Z_B, Z_C, Z_P } from './fluctuation-design.js';
@@ -89,7 +89,7 @@ export function weightedChecks(book: StatisticBook, c: EnsembleConstants): Fluct
     shifted.map((x) => [x, x] as const),
     shiftExpected,
     WEIGHTED_SOURCE,
-    finiteSizeAllowance(WEIGHTED_COVARIANCE_CONSTANT, c, book.size),
+    finiteSizeAllowance(SHIFT_COVARIANCE_CONSTANT, c, book.size),
   );
   const single = cases.map(([name, x, y, expected, what]) =>
     covarianceCheck(
