@@ -2,11 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { type Complex, ONE, abs, add, complex, div, exp, mul, sub } from '../../harness/numeric/complex.js';
 import { dividedDifference, dividedDifferenceRule } from '../../reference-values/divided-difference.js';
 import { stieltjesSemicircle, stieltjesSemicircleDerivative } from '../../reference-values/semicircle-law.js';
+import { expectClose } from './fluctuation-estimates.js';
 
-function expectClose(label: string, observed: Complex, expected: Complex, relative: number): void {
-  const diff = abs(sub(observed, expected));
-  const tolerance = relative * Math.max(abs(expected), 1e-300);
-  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed.re}+${observed.im}i, expected ${expected.re}+${expected.im}i, |diff| ${diff} > ${tolerance}`);
+/** Comparison relative to |expected|. */
+function expectRelative(label: string, observed: Complex, expected: Complex, relative: number): void {
+  expectClose(label, observed, expected, relative * Math.max(abs(expected), 1e-300));
 }
 
 /** 1/Π_j (x0 − z_j): the divided difference over the z_j of ζ ↦ 1/(x0 − ζ) (partial fractions; exact). */
@@ -64,10 +64,10 @@ describe('dividedDifference (Hermite contour form, trapezoid rule; Trefethen and
     for (let k = 1; k <= 5; k++) {
       factorial *= k > 1 ? k - 1 : 1;
       const expected = div(exp(z), complex(factorial, 0));
-      expectClose(`e^ζ, ${k}-fold`, dividedDifference(exp, new Array(k).fill(z), segment), expected, 1e-12);
+      expectRelative(`e^ζ, ${k}-fold`, dividedDifference(exp, new Array(k).fill(z), segment), expected, 1e-12);
     }
     for (const w of [complex(0.3, 0.1), complex(-1.5, -0.02), complex(3, 0)]) {
-      expectClose(`m at ${w.re}+${w.im}i doubled`, dividedDifference(stieltjesSemicircle, [w, w]), stieltjesSemicircleDerivative(w), 1e-10);
+      expectRelative(`m at ${w.re}+${w.im}i doubled`, dividedDifference(stieltjesSemicircle, [w, w]), stieltjesSemicircleDerivative(w), 1e-10);
     }
   });
 
@@ -80,7 +80,7 @@ describe('dividedDifference (Hermite contour form, trapezoid rule; Trefethen and
       const m1 = stieltjesSemicircle(z1);
       const m2 = stieltjesSemicircle(z2);
       const p = mul(m1, m2);
-      expectClose(`${z1.re}+${z1.im}i, ${z2.re}+${z2.im}i`, dividedDifference(stieltjesSemicircle, [z1, z2]), div(p, sub(ONE, p)), 1e-10);
+      expectRelative(`${z1.re}+${z1.im}i, ${z2.re}+${z2.im}i`, dividedDifference(stieltjesSemicircle, [z1, z2]), div(p, sub(ONE, p)), 1e-10);
     }
   });
 
@@ -89,7 +89,7 @@ describe('dividedDifference (Hermite contour form, trapezoid rule; Trefethen and
     const f = (z: Complex): Complex => stieltjesSemicircle(z);
     const g = (z: Complex): Complex => mul(z, z);
     const sum = dividedDifference((z) => add(f(z), g(z)), points);
-    expectClose('linearity', sum, add(dividedDifference(f, points), dividedDifference(g, points)), 1e-13);
+    expectRelative('linearity', sum, add(dividedDifference(f, points), dividedDifference(g, points)), 1e-13);
     expect(dividedDifferenceRule(points).nodes.length).toBeLessThanOrEqual(200);
     expect(() => dividedDifferenceRule([complex(0.5, 0)])).toThrow(RangeError);
     expect(() => dividedDifferenceRule([])).toThrow(RangeError);

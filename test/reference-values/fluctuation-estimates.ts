@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { type Complex, complex } from '../../harness/numeric/complex.js';
+import { type Complex, abs, complex, sub } from '../../harness/numeric/complex.js';
 import type { EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import { upperNormalQuantile } from '../../harness/estimators/normal-tail.js';
 import { randomStream } from '../../harness/numeric/random-stream.js';
@@ -120,4 +120,16 @@ export function expectRejection(label: string, e: Estimate, wrong: Complex, allo
 /** n matrices of `spec` at size N from streams (seed, key, 0 … n − 1), each passed to `visit`. */
 export function forEachSample(spec: EnsembleSpec, N: number, n: number, seed: number, key: string, visit: (h: SquareMatrix, s: number) => void): void {
   for (let s = 0; s < n; s++) visit(sampleMatrix(spec, N, randomStream(seed, key, s)), s);
+}
+
+/** Deterministic comparison of real numbers: fails with input, observed, expected, difference and tolerance. */
+export function expectNear(label: string, observed: number, expected: number, tolerance: number): void {
+  const diff = Math.abs(observed - expected);
+  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed}, expected ${expected}, |diff| ${diff} > ${tolerance}`);
+}
+
+/** Deterministic comparison of complex numbers in modulus (see `expectNear`). */
+export function expectClose(label: string, observed: Complex, expected: Complex, tolerance: number): void {
+  const diff = abs(sub(observed, expected));
+  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed.re}+${observed.im}i, expected ${expected.re}+${expected.im}i, |diff| ${diff} > ${tolerance}`);
 }

@@ -12,15 +12,11 @@ import {
   semicircleCovarianceKernel,
 } from '../../reference-values/mesoscopic-variance.js';
 import { semicircleDensity } from '../../reference-values/semicircle-law.js';
-import { type Estimate, covarianceEstimate, criticalValue, expectAgreement, expectRejection, forEachSample } from './fluctuation-estimates.js';
+import { type Estimate, covarianceEstimate, criticalValue, expectAgreement, expectNear, expectRejection, forEachSample } from './fluctuation-estimates.js';
 
 const GOE: EnsembleConstants = { field: 'real', beta: 1, diagonalVariance: 2, kappa4: 0 };
 const GUE: EnsembleConstants = { field: 'complex', beta: 2, diagonalVariance: 1, kappa4: 0 };
 
-function expectNear(label: string, observed: number, expected: number, tolerance: number): void {
-  const diff = Math.abs(observed - expected);
-  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed}, expected ${expected}, |diff| ${diff} > ${tolerance}`);
-}
 
 const gaussian = (x: number): number => Math.exp(-x * x / 2);
 const lorentzian = (x: number): number => 1 / (1 + x * x);
@@ -121,14 +117,16 @@ describe('the macroscopic kernel form and the finite-N corrections it implies (e
  * energies E_k = −0.8, −0.3, 0.3, 0.8. The statistic compared is the sum over k of the variances of
  * Tr f(N^γ(H − E_k)) (its SE from the per-sample sums of squared centred values, which accounts for
  * any correlation between energies); the reference is the sum of (limit + correction).
- * - GOE, γ = 0.7, 4000 samples: the correction is −11 % to −12 %, mostly the GOE term
+ * - GOE, γ = 0.7, 2500 samples: the correction is −11 % to −12 %, mostly the GOE term
  *   −∫f′²/(2π²ρ(E)N^{1−γ}). Allowance for the next order: a pilot run (numpy, 2·10⁴ samples, E = 0
  *   and 0.8) found the corrected value within 1.7 % of the limit at N = 100 (+0.005, 1.7–1.9 pilot SE)
  *   and at N = 200; allowance 2 % of the summed limits. The uncorrected limits must be rejected.
- * - GUE, γ = 0.5, 1500 samples: correction below 0.5 %; pilot deviations up to 2 % at N = 100
+ * - GUE, γ = 0.5, 1200 samples: correction below 0.5 %; pilot deviations up to 2 % at N = 100
  *   (1.5 pilot SE); allowance 2 % of the summed limits. Also the Lorentzian at E = 0 (limit 1/8), and
  *   the cross-covariance of bumps at ±0.8 at γ = 0.3 (L = N^0.3 ≈ 4, reference −0.0108), whose
- *   allowance is the approximation's own relative error 8/(LΔE)² (deterministic test above) plus 2/N.
+ *   allowance is the approximation's own relative error 8/(LΔE)² (deterministic test above) plus
+ *   10 % (a pilot at N = 200, 8000 samples, agreed within 4 % ± 17 %). This last check has little
+ *   power (the signal is about 3 SE): it guards the sign and the order of magnitude.
  * False alarms: 5 comparisons at family level 10⁻³ (Bonferroni).
  */
 const N = 100;
@@ -151,7 +149,7 @@ describe('mesoscopic variances against simulation', () => {
     const gamma = 0.7;
     const L = N ** gamma;
     const samples: number[][] = ENERGIES.map(() => []);
-    forEachSample(parseEnsemble('goe'), N, 4000, 1606, 'mesoscopic-variance goe', (h) => {
+    forEachSample(parseEnsemble('goe'), N, 2500, 1606, 'mesoscopic-variance goe', (h) => {
       const values = eigenvalues(h);
       ENERGIES.forEach((E, k) => samples[k].push(linearStatistic(values, (x) => gaussian(L * (x - E)))));
     });
@@ -170,7 +168,7 @@ describe('mesoscopic variances against simulation', () => {
     const lorentz: number[] = [];
     const left: number[] = [];
     const right: number[] = [];
-    forEachSample(parseEnsemble('gue'), N, 1500, 1607, 'mesoscopic-variance gue', (h) => {
+    forEachSample(parseEnsemble('gue'), N, 1200, 1607, 'mesoscopic-variance gue', (h) => {
       const values = eigenvalues(h);
       ENERGIES.forEach((E, k) => samples[k].push(linearStatistic(values, (x) => gaussian(L * (x - E)))));
       lorentz.push(linearStatistic(values, (x) => lorentzian(L * x)));
@@ -183,7 +181,7 @@ describe('mesoscopic variances against simulation', () => {
     const lorentzLimit = mesoscopicVariance(lorentzian, 2) + mesoscopicVarianceCorrection(lorentzian, 2, 0, N, gamma);
     expectAgreement('GUE Lorentzian', summedVariance([lorentz]), complex(lorentzLimit, 0), 0.02 * mesoscopicVariance(lorentzian, 2), Z);
     const cross = mesoscopicCrossCovariance(gaussian, 2, -0.8, 0.8, N, 0.3);
-    const allowance = (8 / (wide * 1.6) ** 2) * Math.abs(cross) + 2 / N;
+    const allowance = (8 / (wide * 1.6) ** 2 + 0.1) * Math.abs(cross);
     expectAgreement('GUE cross-covariance at ±0.8', covarianceEstimate(left.map((v) => complex(v, 0)), right.map((v) => complex(v, 0))), complex(cross, 0), allowance, Z);
   });
 });

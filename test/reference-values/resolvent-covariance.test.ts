@@ -12,15 +12,11 @@ import {
   weightOverlaps,
 } from '../../reference-values/resolvent-covariance.js';
 import { stieltjesSemicircle } from '../../reference-values/semicircle-law.js';
-import { covarianceEstimate, criticalValue, expectAgreement, expectRejection, forEachSample } from './fluctuation-estimates.js';
+import { covarianceEstimate, criticalValue, expectAgreement, expectClose, expectRejection, forEachSample } from './fluctuation-estimates.js';
 
 const GOE: EnsembleConstants = { field: 'real', beta: 1, diagonalVariance: 2, kappa4: 0 };
 const GUE: EnsembleConstants = { field: 'complex', beta: 2, diagonalVariance: 1, kappa4: 0 };
 
-function expectClose(label: string, observed: Complex, expected: Complex, tolerance: number): void {
-  const diff = abs(sub(observed, expected));
-  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed.re}+${observed.im}i, expected ${expected.re}+${expected.im}i, |diff| ${diff} > ${tolerance}`);
-}
 
 /** 1/(x − z) as a complex-valued function of real x. */
 const resolventFunction =

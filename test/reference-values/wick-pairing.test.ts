@@ -7,12 +7,8 @@ import { normalisedResolventTrace } from '../../harness/numeric/resolvent-statis
 import { tracialResolventCovariance } from '../../reference-values/resolvent-covariance.js';
 import { centredJointCumulant4, jointCumulant, pairingSum, sampleJointCumulant4 } from '../../reference-values/wick-pairing.js';
 import { gaussianMoment, pairings } from './exact-moment-enumeration.js';
-import { criticalValue, expectAgreement, forEachSample } from './fluctuation-estimates.js';
+import { criticalValue, expectAgreement, expectClose, forEachSample } from './fluctuation-estimates.js';
 
-function expectClose(label: string, observed: Complex, expected: Complex, tolerance: number): void {
-  const diff = abs(sub(observed, expected));
-  if (!(diff <= tolerance)) expect.fail(`${label}: observed ${observed.re}+${observed.im}i, expected ${expected.re}+${expected.im}i, |diff| ${diff} > ${tolerance}`);
-}
 
 /** A fixed pseudo-random complex covariance table (linear congruential; any numbers will do). */
 function table(size: number): Complex[][] {
