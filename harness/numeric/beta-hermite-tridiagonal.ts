@@ -34,7 +34,8 @@ import type { SymmetricTridiagonal } from './symmetric-tridiagonal.js';
  *
  * Reference: I. Dumitriu and A. Edelman, "Matrix models for beta ensembles", J. Math. Phys. 43(11)
  * (2002) 5830–5847, doi:10.1063/1.1507823, the β-Hermite model of §2 (theorem number not quoted:
- * from memory). The β = 1 case goes back to H. F. Trotter, Adv. Math. 54 (1984) 67–82.
+ * from memory). The β = 1 case goes back to H. F. Trotter, Adv. Math. 54 (1984) 67–82 (citation
+ * from memory).
  */
 export function sampleBetaHermiteTridiagonal(beta: number, size: number, stream: RandomStream): SymmetricTridiagonal {
   if (!(beta > 0) || !Number.isFinite(beta)) throw new RangeError(`β-Hermite: β must be a finite number > 0, got ${beta}`);

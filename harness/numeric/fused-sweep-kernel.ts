@@ -58,7 +58,7 @@ export function fusedSweepKernel(): FusedSweepKernel | null {
 }
 
 const PAGE = 65536;
-/** 4 GiB in 64 KiB pages, the most a 32-bit WebAssembly memory can have (spec §2.5.4, limits). */
+/** 4 GiB in 64 KiB pages, the most a 32-bit WebAssembly memory can have (memory types, spec §3.2; section from memory). */
 const MAX_PAGES = 65536;
 
 /**
