@@ -18,6 +18,9 @@ export function evidenceLines(v: CheckVerdict, once: (text: string) => string = 
       `error bar  ±${shortQuantity(e.standardError, 3)} (${once(e.standardErrorMethod)})`,
       `allowance  ${shortNumber(e.allowance)} (${once(e.allowanceReason)})`,
       `excess     ${shortNumber(e.zScore)} standard errors beyond the allowance; p = ${shortNumber(e.pValue)}, Holm-adjusted ${shortNumber(v.adjustedPValue ?? NaN)}`,
+      ...(e.detectableRelativeError === undefined
+        ? []
+        : [`power      detects a relative error of ${shortNumber(e.detectableRelativeError)} or more with probability 0.8 at its share of the level`]),
     ];
   }
   return [
