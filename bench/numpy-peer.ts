@@ -51,3 +51,14 @@ export function runNumpyPeer(args: readonly string[], oneThread: boolean, log: (
   for (const r of report.results ?? []) times.set(`${r.routine}/${r.n}`, r.best);
   return { times, description: `numpy ${report.numpy}, BLAS ${JSON.stringify(report.blas)}` };
 }
+
+/**
+ * One run from several runs of the same peer: the best time of each routine over all of them, and
+ * the first run's description. Timing the peer both before and after our side and keeping the best
+ * of each stops a burst of load from other work on a shared machine from landing on one side only.
+ */
+export function bestOfPeerRuns(runs: readonly NumpyPeerRun[]): NumpyPeerRun {
+  const times = new Map<string, number>();
+  for (const run of runs) for (const [key, seconds] of run.times) times.set(key, Math.min(seconds, times.get(key) ?? Number.POSITIVE_INFINITY));
+  return { times, description: runs[0]?.description ?? 'absent (not run)' };
+}
