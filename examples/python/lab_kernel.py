@@ -48,18 +48,43 @@ def chain_trace(H, points, weights):
 
 
 def sample_statistics(ensemble, size, seed, count, chains):
-    """For each sampled matrix, every chain's normalised trace, from one eigendecomposition: with
-    B_j = U* A_j U and D_j = diag(1/(lam - z_j)), <G(z1)A1 ... G(zk)Ak> = Tr(D1 B1 ... Dk Bk)/N.
+    """For each sampled matrix, every chain's normalised trace, from one eigendecomposition
+    H = U diag(lam) U*: with B_j = U* A_j U and D_j = diag(1/(lam - z_j)),
+    <G(z1)A1 ... G(zk)Ak> = Tr(D1 B1 ... Dk Bk)/N. Identity weights need only the spectrum, one
+    weight needs only the diagonal of B, and each distinct weight is transformed once per sample.
     What a pipeline that never hands over its matrices would answer."""
+    identity = np.eye(size)
+    is_identity = {}
     rows = []
     for H in sample(ensemble, size, seed, count):
         lam, U = np.linalg.eigh(H)
+        transformed = {}
+
+        def in_eigenbasis(A):
+            key = (A.dtype.str, A.tobytes())
+            if key not in transformed:
+                transformed[key] = U.conj().T @ A @ U
+            return transformed[key]
+
         row = []
         for points, weights in chains:
-            product = np.eye(size, dtype=complex)
-            for z, A in zip(points, weights):
-                product = (product / (lam - z)[np.newaxis, :]) @ (U.conj().T @ A @ U)
-            row.append(np.trace(product) / size)
+            flags = []
+            for A in weights:
+                key = (A.dtype.str, A.tobytes())
+                if key not in is_identity:
+                    is_identity[key] = A.shape == identity.shape and np.array_equal(A, identity)
+                flags.append(is_identity[key])
+            if all(flags):
+                row.append(np.sum(np.prod([1.0 / (lam - z) for z in points], axis=0)) / size if points else 1.0)
+            elif len(points) == 1:
+                row.append(np.sum(np.diag(in_eigenbasis(weights[0])) / (lam - points[0])) / size)
+            else:
+                product = np.eye(size, dtype=complex)
+                for z, A, plain in zip(points, weights, flags):
+                    product = product / (lam - z)[np.newaxis, :]
+                    if not plain:
+                        product = product @ in_eigenbasis(A)
+                row.append(np.trace(product) / size)
         rows.append(row)
     return rows
 
