@@ -3,9 +3,9 @@ import type { SquareMatrix } from '../harness/numeric/square-matrix.js';
 import { tridiagonalEigenvalues } from '../harness/numeric/tridiagonal-eigenvalues.js';
 import { tridiagonaliseReal } from '../harness/numeric/tridiagonalise-real.js';
 import { tridiagonaliseRealBlocked } from '../harness/numeric/tridiagonalise-real-blocked.js';
-import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult, BenchmarkRow } from './benchmark-group.js';
+import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult } from './benchmark-group.js';
 import { bestOf } from './best-of.js';
-import { bestOfPeerRuns, runNumpyPeer } from './numpy-peer.js';
+import { bestOfPeerRuns, rowsAgainstPeer, runNumpyPeer, type OurTiming } from './numpy-peer.js';
 
 /**
  * Eigenvalues and eigenpairs of dense real symmetric matrices: ours (harness/numeric/eigen.ts)
@@ -39,7 +39,7 @@ async function runEigenBench(options: BenchmarkOptions): Promise<BenchmarkResult
   eigenpairs(symmetricTestMatrix(64, 1));
   scalarEigenvalues(symmetricTestMatrix(64, 1));
   blockedEigenvalues(symmetricTestMatrix(64, 1));
-  const timings: { routine: string; n: number; ours: number; peer: string }[] = [];
+  const timings: OurTiming[] = [];
   for (const n of options.sizes) {
     const m = symmetricTestMatrix(n, n);
     const r = repetitions(n);
@@ -55,10 +55,10 @@ async function runEigenBench(options: BenchmarkOptions): Promise<BenchmarkResult
     }
     options.log(`eigen: N = ${n}, eigenpairs ×${r.pairs}`);
     const pairs = bestOf(r.pairs, () => eigenpairs(m));
-    timings.push({ routine: 'eigenvalues', n, ours: values, peer: 'eigenvalues' });
-    timings.push({ routine: 'eigenvalues, scalar sweep', n, ours: scalar, peer: 'eigenvalues' });
-    timings.push({ routine: 'eigenvalues, blocked reduction', n, ours: blocked, peer: 'eigenvalues' });
-    timings.push({ routine: 'eigenpairs', n, ours: pairs, peer: 'eigenpairs' });
+    timings.push({ routine: 'eigenvalues', n, unit: 'call', workers: 1, ours: values, peer: 'eigenvalues' });
+    timings.push({ routine: 'eigenvalues, scalar sweep', n, unit: 'call', workers: 1, ours: scalar, peer: 'eigenvalues' });
+    timings.push({ routine: 'eigenvalues, blocked reduction', n, unit: 'call', workers: 1, ours: blocked, peer: 'eigenvalues' });
+    timings.push({ routine: 'eigenpairs', n, unit: 'call', workers: 1, ours: pairs, peer: 'eigenpairs' });
   }
   // The peer again after ours, best of both (numpy-peer.ts, bestOfPeerRuns).
   const single = bestOfPeerRuns([singleBefore, runNumpyPeer(peerArgs, true, options.log, 'eigen')]);
@@ -66,16 +66,7 @@ async function runEigenBench(options: BenchmarkOptions): Promise<BenchmarkResult
   notes.push('numpy timed before and after ours; each routine its best of both runs');
   notes.push(`numpy, 1 thread: ${single.description}`);
   notes.push(`numpy, as it comes: ${free.description}`);
-  const rows: BenchmarkRow[] = timings.map((t) => ({
-    routine: t.routine,
-    n: t.n,
-    unit: 'call',
-    workers: 1,
-    ours_s: t.ours,
-    numpy_1thread_s: single.times.get(`${t.peer}/${t.n}`) ?? null,
-    numpy_s: free.times.get(`${t.peer}/${t.n}`) ?? null,
-  }));
-  return { rows, notes };
+  return { rows: rowsAgainstPeer(timings, single, free), notes };
 }
 
 /** The fused reduction without the SIMD kernel, then the same root-free QL as eigenvalues(). */

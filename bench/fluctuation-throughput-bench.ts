@@ -1,6 +1,6 @@
-import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult, BenchmarkRow } from './benchmark-group.js';
+import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult } from './benchmark-group.js';
 import type { FluctuationWorkload } from './fluctuation-sample.js';
-import { bestOfPeerRuns, runNumpyPeer } from './numpy-peer.js';
+import { bestOfPeerRuns, rowsAgainstPeer, runNumpyPeer, type OurTiming } from './numpy-peer.js';
 import { inProcessRunner, type ThroughputRunner } from './throughput-runner.js';
 
 /**
@@ -42,7 +42,7 @@ async function runThroughput(options: BenchmarkOptions, runners: readonly Throug
   const peerArgs = ['--mode', 'fluctuation', '--sizes', options.sizes.join(','), '--samples', samples.join(','), '--reps', options.sizes.map(() => REPETITIONS).join(','), '--z', zArgument];
   const singleBefore = runNumpyPeer(peerArgs, true, options.log, 'fluctuation-throughput');
   const freeBefore = runNumpyPeer(peerArgs, false, options.log, 'fluctuation-throughput');
-  const timings: { routine: string; n: number; workers: number; ours: number }[] = [];
+  const timings: OurTiming[] = [];
   for (const [s, n] of options.sizes.entries()) {
     const count = samples[s];
     for (const route of ['dense', 'tridiagonal'] as const) {
@@ -53,7 +53,7 @@ async function runThroughput(options: BenchmarkOptions, runners: readonly Throug
         let best = Number.POSITIVE_INFINITY;
         for (let r = 0; r < REPETITIONS; r++) best = Math.min(best, (await runner.run(workload, n, r * count, count)) / count);
         const routine = route === 'dense' ? 'fluctuation sample (dense GOE)' : 'fluctuation sample (tridiagonal model)';
-        timings.push({ routine, n, workers: runner.workers, ours: best });
+        timings.push({ routine, n, unit: 'sample', workers: runner.workers, ours: best, peer: 'fluctuation-sample' });
       }
     }
   }
@@ -67,14 +67,5 @@ async function runThroughput(options: BenchmarkOptions, runners: readonly Throug
     `numpy, 1 thread: ${single.description}`,
     `numpy, as it comes: ${free.description}`,
   ];
-  const rows: BenchmarkRow[] = timings.map((t) => ({
-    routine: t.routine,
-    n: t.n,
-    unit: 'sample',
-    workers: t.workers,
-    ours_s: t.ours,
-    numpy_1thread_s: single.times.get(`fluctuation-sample/${t.n}`) ?? null,
-    numpy_s: free.times.get(`fluctuation-sample/${t.n}`) ?? null,
-  }));
-  return { rows, notes };
+  return { rows: rowsAgainstPeer(timings, single, free), notes };
 }

@@ -1,6 +1,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import type { BenchmarkRow } from './benchmark-group.js';
 
 /**
  * Runs bench/numpy-peer.py in one mode and reads its JSON: the peer every benchmark group times
@@ -61,4 +62,28 @@ export function bestOfPeerRuns(runs: readonly NumpyPeerRun[]): NumpyPeerRun {
   const times = new Map<string, number>();
   for (const run of runs) for (const [key, seconds] of run.times) times.set(key, Math.min(seconds, times.get(key) ?? Number.POSITIVE_INFINITY));
   return { times, description: runs[0]?.description ?? 'absent (not run)' };
+}
+
+/** Our side of one row: what was timed, and which peer routine it is held against. */
+export interface OurTiming {
+  readonly routine: string;
+  readonly n: number;
+  readonly unit: BenchmarkRow['unit'];
+  readonly workers: number;
+  readonly ours: number;
+  /** The peer's routine name (its times are keyed "routine/n"). */
+  readonly peer: string;
+}
+
+/** The table's rows: each timing beside the peer's best time for the same routine and N, one thread and as it comes. */
+export function rowsAgainstPeer(timings: readonly OurTiming[], single: NumpyPeerRun, free: NumpyPeerRun): BenchmarkRow[] {
+  return timings.map((t) => ({
+    routine: t.routine,
+    n: t.n,
+    unit: t.unit,
+    workers: t.workers,
+    ours_s: t.ours,
+    numpy_1thread_s: single.times.get(`${t.peer}/${t.n}`) ?? null,
+    numpy_s: free.times.get(`${t.peer}/${t.n}`) ?? null,
+  }));
 }

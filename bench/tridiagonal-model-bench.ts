@@ -2,9 +2,9 @@ import { eigenvalues } from '../harness/numeric/eigen.js';
 import { randomStream } from '../harness/numeric/random-stream.js';
 import { sampleMatrix } from '../harness/numeric/sample-wigner.js';
 import { largestEigenvalueOfEnsemble, spectrumOfEnsemble } from '../harness/numeric/spectrum-of-ensemble.js';
-import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult, BenchmarkRow } from './benchmark-group.js';
+import type { BenchmarkGroup, BenchmarkOptions, BenchmarkResult } from './benchmark-group.js';
 import { bestOf } from './best-of.js';
-import { bestOfPeerRuns, runNumpyPeer } from './numpy-peer.js';
+import { bestOfPeerRuns, rowsAgainstPeer, runNumpyPeer, type OurTiming } from './numpy-peer.js';
 
 /**
  * GOE spectra by the tridiagonal model (spectrum-of-ensemble.ts: Dumitriu–Edelman draw, O(N), then
@@ -39,10 +39,10 @@ async function runTridiagonalBench(options: BenchmarkOptions): Promise<Benchmark
     largestEigenvalueOfEnsemble(goe, 200, randomStream(1, 'bench-warm', i));
   }
   eigenvalues(sampleMatrix(goe, 64, randomStream(1, 'bench-warm', 0)));
-  const timings: { routine: string; n: number; ours: number }[] = [];
+  const timings: OurTiming[] = [];
   for (const n of options.sizes) {
     const reps = repetitions(n).ours;
-    const row = (routine: string, ours: number): number => timings.push({ routine, n, ours });
+    const row = (routine: string, ours: number): number => timings.push({ routine, n, unit: 'call', workers: 1, ours, peer: 'goe-spectrum' });
     let index = 0;
     options.log(`tridiagonal-model: N = ${n}, spectrum ×${reps}`);
     row('goe spectrum: tridiagonal model + QL', bestOf(reps, () => spectrumOfEnsemble(goe, n, randomStream(2, 'bench-spectrum', index++))));
@@ -65,14 +65,5 @@ async function runTridiagonalBench(options: BenchmarkOptions): Promise<Benchmark
     `numpy, 1 thread: ${single.description}`,
     `numpy, as it comes: ${free.description}`,
   ];
-  const rows: BenchmarkRow[] = timings.map((t) => ({
-    routine: t.routine,
-    n: t.n,
-    unit: 'call',
-    workers: 1,
-    ours_s: t.ours,
-    numpy_1thread_s: single.times.get(`goe-spectrum/${t.n}`) ?? null,
-    numpy_s: free.times.get(`goe-spectrum/${t.n}`) ?? null,
-  }));
-  return { rows, notes };
+  return { rows: rowsAgainstPeer(timings, single, free), notes };
 }
