@@ -133,13 +133,18 @@ export function momentMethodPolynomial(k: number, law: IntegerMomentLaw): bigint
   return monomial;
 }
 
-function patternExpectation(labels: readonly number[], law: IntegerMomentLaw): bigint {
+/**
+ * The moments of the entries along the edges of one index pattern: labels[t] is the block of
+ * position t, and position t is followed by next[t] (one cycle per trace). Shared by the single-trace
+ * and the trace-product enumerations.
+ */
+export function patternExpectation(labels: readonly number[], law: IntegerMomentLaw, next?: readonly number[]): bigint {
   const size = labels.length;
   const forward = new Map<string, number>();
   const backward = new Map<string, number>();
   for (let t = 0; t < size; t++) {
     const u = labels[t];
-    const v = labels[(t + 1) % size];
+    const v = labels[next === undefined ? (t + 1) % size : next[t]];
     const key = `${Math.min(u, v)},${Math.max(u, v)}`;
     const map = u <= v ? forward : backward;
     map.set(key, (map.get(key) ?? 0) + 1);

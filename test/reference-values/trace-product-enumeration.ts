@@ -1,4 +1,4 @@
-import { type IntegerMomentLaw, pairings } from './exact-moment-enumeration.js';
+import { type IntegerMomentLaw, pairings, patternExpectation } from './exact-moment-enumeration.js';
 
 /**
  * Exact enumerations of joint moments of traces, E[Π_c Tr X^{p_c}], as polynomials in N, for the
@@ -65,29 +65,6 @@ export function wickTraceProductPolynomial(lengths: readonly number[], ensemble:
   return coefficients;
 }
 
-/** The moments of the entries along the edges of one index pattern (labels = block of each position). */
-function patternExpectation(labels: readonly number[], next: readonly number[], law: IntegerMomentLaw): bigint {
-  const forward = new Map<string, number>();
-  const backward = new Map<string, number>();
-  labels.forEach((u, t) => {
-    const v = labels[next[t]];
-    const key = `${Math.min(u, v)},${Math.max(u, v)}`;
-    const map = u <= v ? forward : backward;
-    map.set(key, (map.get(key) ?? 0) + 1);
-  });
-  let product = 1n;
-  for (const key of new Set([...forward.keys(), ...backward.keys()])) {
-    const p = forward.get(key) ?? 0;
-    const q = backward.get(key) ?? 0;
-    const [u, v] = key.split(',');
-    if (u === v) product *= law.diagonal(p);
-    else if (law.field === 'real') product *= law.offDiagonal(p + q);
-    else product *= p === q ? law.offDiagonal(p) : 0n; // E x^p x̄^q = 0 for p ≠ q (phase invariance)
-    if (product === 0n) return 0n;
-  }
-  return product;
-}
-
 /** E[Π_c Tr X^{p_c}] as a polynomial in N by the moment method (set partitions of the positions). */
 export function momentMethodTraceProductPolynomial(lengths: readonly number[], law: IntegerMomentLaw): bigint[] {
   const size = lengths.reduce((a, b) => a + b, 0);
@@ -96,7 +73,7 @@ export function momentMethodTraceProductPolynomial(lengths: readonly number[], l
   const labels = new Array<number>(size).fill(0);
   const visit = (position: number, blocks: number): void => {
     if (position === size) {
-      falling[blocks] += patternExpectation(labels, next, law);
+      falling[blocks] += patternExpectation(labels, law, next);
       return;
     }
     for (let b = 0; b <= blocks; b++) {
