@@ -69,7 +69,16 @@ export function wickTracePolynomial(k: number, ensemble: 'goe' | 'gue'): bigint[
 
 /** The same Wick sum with explicit indices 0..N−1 (no symbolic counting), for small N and k. */
 export function wickTraceExplicit(N: number, k: number, ensemble: 'goe' | 'gue'): number {
-  const size = 2 * k;
+  return wickExplicit(N, 2 * k, ensemble);
+}
+
+/**
+ * Wick's rule over explicit indices 0..N−1 for `size` entries x_{i_t i_next[t]} (one cycle per
+ * trace; a single trace when `next` is absent), GOE or GUE covariances (tiny N only).
+ */
+export function wickExplicit(N: number, size: number, ensemble: 'goe' | 'gue', next?: readonly number[]): number {
+  if (size % 2 === 1) return 0;
+  const after = (t: number) => (next === undefined ? (t + 1) % size : next[t]);
   const all = pairings(size);
   const index = new Array<number>(size).fill(0);
   const cov = (a: number, b: number, c: number, d: number): number =>
@@ -80,7 +89,7 @@ export function wickTraceExplicit(N: number, k: number, ensemble: 'goe' | 'gue')
     for (const pairing of all) {
       let product = 1;
       for (const [s, t] of pairing) {
-        product *= cov(index[s], index[(s + 1) % size], index[t], index[(t + 1) % size]);
+        product *= cov(index[s], index[after(s)], index[t], index[after(t)]);
         if (product === 0) break;
       }
       total += product;

@@ -1,4 +1,4 @@
-import { type IntegerMomentLaw, pairings, patternExpectation } from './exact-moment-enumeration.js';
+import { type IntegerMomentLaw, pairings, patternExpectation, wickExplicit } from './exact-moment-enumeration.js';
 
 /**
  * Exact enumerations of joint moments of traces, E[Π_c Tr X^{p_c}], as polynomials in N, for the
@@ -99,26 +99,7 @@ export function momentMethodTraceProductPolynomial(lengths: readonly number[], l
 
 /** E[Π_c Tr X^{p_c}] by Wick's rule over explicit indices 0..N−1 (tiny N only). */
 export function wickTraceProductExplicit(lengths: readonly number[], ensemble: 'goe' | 'gue', N: number): number {
-  const size = lengths.reduce((a, b) => a + b, 0);
-  if (size % 2 === 1) return 0;
-  const next = successors(lengths);
-  const all = pairings(size);
-  const index = new Array<number>(size).fill(0);
-  const cov = (a: number, b: number, c: number, d: number): number =>
-    (ensemble === 'goe' && a === c && b === d ? 1 : 0) + (a === d && b === c ? 1 : 0);
-  let total = 0;
-  for (let tuple = 0; tuple < N ** size; tuple++) {
-    for (let t = 0, r = tuple; t < size; t++, r = Math.floor(r / N)) index[t] = r % N;
-    for (const pairing of all) {
-      let product = 1;
-      for (const [s, t] of pairing) {
-        product *= cov(index[s], index[next[s]], index[t], index[next[t]]);
-        if (product === 0) break;
-      }
-      total += product;
-    }
-  }
-  return total;
+  return wickExplicit(N, lengths.reduce((a, b) => a + b, 0), ensemble, successors(lengths));
 }
 
 /** a − b·c for polynomials (coefficient arrays, index = power). */
