@@ -1,13 +1,16 @@
-import { AdapterFault, NotAvailable, type Adapter, type AdapterDescription } from '../adapters/adapter.js';
+import type { Adapter, AdapterDescription } from '../adapters/adapter.js';
 import type { CheckContext, CheckGroup, PropertySuite } from './check-group.js';
 import { decideVerdicts, type RawOutcome } from './decide-verdicts.js';
 import { ensembleLabel } from './numeric/ensemble.js';
 import { randomStream } from './numeric/random-stream.js';
-import { replayCommand } from './replay-command.js';
+import { RunAssembly } from './run-assembly.js';
 import { RESULT_FORMAT_VERSION, RUN_CAVEATS, type RunResult } from './run-result.js';
 import type { RunSettings } from './run-settings.js';
 import { TOOL_NAME, TOOL_VERSION } from './tool-identity.js';
+import { inThreadRunner, type UnitRunner } from './unit-runner.js';
 import type { VerdictState } from './verdict.js';
+import { unitsOfRun, type ShardChoice, type WorkUnit } from './work-unit.js';
+import type { UnitOutcome } from './unit-outcome.js';
 
 /** Progress as the run goes; reporters hook in here. Verdicts come only at the end (Holm). */
 export interface RunProgress {
@@ -15,7 +18,12 @@ export interface RunProgress {
   onCheckFinished?(outcome: RawOutcome, finished: number, total: number): void;
 }
 
-function contextFor(adapter: Adapter, description: AdapterDescription, settings: RunSettings): CheckContext {
+/** How the units run: in this thread unless a runner (a worker pool) is given. */
+export interface RunOptions {
+  readonly runner?: (groups: readonly CheckGroup[], description: AdapterDescription) => Promise<UnitRunner>;
+}
+
+export function contextFor(adapter: Adapter, description: AdapterDescription, settings: RunSettings): CheckContext {
   return {
     adapter,
     capabilities: new Set(description.capabilities),
@@ -25,36 +33,48 @@ function contextFor(adapter: Adapter, description: AdapterDescription, settings:
   };
 }
 
-function planned(group: CheckGroup, settings: RunSettings) {
-  return group.checks.map((c) => ({ ...c, suite: group.suite, replay: replayCommand(settings, group.suite, c.id) }));
-}
-
-async function runGroup(group: CheckGroup, context: CheckContext): Promise<RawOutcome[]> {
-  const checks = planned(group, context.settings);
-  const skip = group.skipReason(context.capabilities);
-  if (skip !== null) return checks.map((c) => ({ ...c, state: 'skipped', reason: skip }));
-  try {
-    const findings = await group.run(context);
-    return checks.map((c, i) => {
-      const finding = findings[i];
-      const replayCase = finding.state === 'measured' ? finding.replayCase : undefined;
-      return { ...c, ...finding, ...(replayCase ? { replay: replayCommand(context.settings, group.suite, c.id, replayCase) } : {}) };
-    });
-  } catch (error) {
-    if (error instanceof NotAvailable) {
-      return checks.map((c) => ({ ...c, state: 'skipped', reason: error.message }));
-    }
-    const fault =
-      error instanceof AdapterFault
-        ? { faultKind: error.kind, faultMethod: error.method, reason: `${error.method}: ${error.message}` }
-        : { faultKind: 'internal-error', faultMethod: 'harness', reason: `harness error: ${(error as Error)?.message ?? String(error)}` };
-    return checks.map((c) => ({ ...c, state: 'fault', ...fault }));
-  }
+/** Whether a check is asked for (`--only`; all when empty). */
+function wantedBy(settings: RunSettings): (id: string) => boolean {
+  const only = new Set(settings.only);
+  return (id) => only.size === 0 || only.has(id);
 }
 
 /**
- * Runs the suites against one adapter: plan, run each group (a fault stays inside its group),
- * then apply the family-wise control and assemble the result model.
+ * The groups of a run. A group runs whole (its checks share samples); with --only, the findings of
+ * the checks not asked for are dropped afterwards, never the group's own pairing of checks and findings.
+ */
+export function planGroups(settings: RunSettings, suites: readonly PropertySuite[]): CheckGroup[] {
+  const wanted = wantedBy(settings);
+  return suites.flatMap((suite) => suite.plan(settings)).filter((g) => g.checks.some((c) => wanted(c.id)));
+}
+
+/** Runs the units of `groups` (all, or one shard's) and hands each outcome to `record`. */
+export async function runUnits(
+  adapter: Adapter,
+  description: AdapterDescription,
+  settings: RunSettings,
+  groups: readonly CheckGroup[],
+  record: (unit: WorkUnit, outcome: UnitOutcome) => void,
+  abandon: (unit: WorkUnit) => boolean,
+  options: RunOptions,
+  shard?: ShardChoice,
+): Promise<string> {
+  const context = contextFor(adapter, description, settings);
+  const units = unitsOfRun(groups, (g) => g.skipReason(context.capabilities) === null, shard);
+  const runner = options.runner === undefined ? inThreadRunner(groups, context) : await options.runner(groups, description);
+  try {
+    await runner.run(units, abandon, record);
+  } catch (error) {
+    await runner.close();
+    throw error;
+  }
+  return runner.close();
+}
+
+/**
+ * Runs the suites against one adapter: plan, run each group's units (a fault stays inside its
+ * group), assemble each group as its units come in, then apply the family-wise control and
+ * assemble the result model.
  */
 export async function runChecks(
   adapter: Adapter,
@@ -62,24 +82,57 @@ export async function runChecks(
   suites: readonly PropertySuite[],
   progress: RunProgress = {},
   adapterLog: () => string = () => '',
+  options: RunOptions = {},
 ): Promise<RunResult> {
   const description = await adapter.describe();
-  const context = contextFor(adapter, description, settings);
-  // A group runs whole (its checks share samples); with --only, the findings of the checks not
-  // asked for are dropped afterwards, never the group's own pairing of checks and findings.
-  const only = new Set(settings.only);
-  const wanted = (id: string) => only.size === 0 || only.has(id);
-  const groups = suites.flatMap((suite) => suite.plan(settings)).filter((g) => g.checks.some((c) => wanted(c.id)));
+  const groups = planGroups(settings, suites);
+  const assembly = new RunAssembly(groups, { capabilities: new Set(description.capabilities), settings });
+  const collect = outcomeCollector(groups, settings, description, progress);
+  collect(assembly.releaseFinished());
+  const runnerLog = await runUnits(
+    adapter,
+    description,
+    settings,
+    groups,
+    (unit, outcome) => {
+      assembly.record(unit, outcome);
+      collect(assembly.releaseFinished());
+    },
+    (unit) => assembly.hasTrouble(unit),
+    options,
+  );
+  return resultOfRun(description, settings, suites, collect.outcomes, [adapterLog(), runnerLog].filter((l) => l !== '').join('\n'));
+}
+
+/** Keeps the wanted outcomes in plan order and reports progress; `onRunStart` goes out on creation. */
+export function outcomeCollector(
+  groups: readonly CheckGroup[],
+  settings: RunSettings,
+  description: AdapterDescription,
+  progress: RunProgress,
+): ((released: readonly RawOutcome[]) => void) & { readonly outcomes: RawOutcome[] } {
+  const wanted = wantedBy(settings);
   const total = groups.reduce((n, g) => n + g.checks.filter((c) => wanted(c.id)).length, 0);
   progress.onRunStart?.({ adapter: description, totalChecks: total });
   const outcomes: RawOutcome[] = [];
-  for (const group of groups) {
-    for (const outcome of await runGroup(group, context)) {
+  const collect = (released: readonly RawOutcome[]) => {
+    for (const outcome of released) {
       if (!wanted(outcome.id)) continue;
       outcomes.push(outcome);
       progress.onCheckFinished?.(outcome, outcomes.length, total);
     }
-  }
+  };
+  return Object.assign(collect, { outcomes });
+}
+
+/** The result model from the raw outcomes of every group, in plan order. */
+export function resultOfRun(
+  description: AdapterDescription,
+  settings: RunSettings,
+  suites: readonly PropertySuite[],
+  outcomes: readonly RawOutcome[],
+  adapterLog: string,
+): RunResult {
   const verdicts = decideVerdicts(outcomes, settings.alpha);
   const counts: Record<VerdictState, number> = { pass: 0, fail: 0, skipped: 0, fault: 0 };
   for (const v of verdicts) counts[v.state]++;
@@ -105,6 +158,6 @@ export async function runChecks(
     suites: suites.map((s) => ({ name: s.name, description: s.description, checks: verdicts.filter((v) => v.suite === s.name) })),
     counts,
     caveats: RUN_CAVEATS,
-    adapterLog: adapterLog(),
+    adapterLog,
   };
 }

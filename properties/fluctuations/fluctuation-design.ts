@@ -34,24 +34,34 @@ export const MESOSCOPIC_ENERGIES: readonly [number, number] = [-0.5, 0.5];
  * complex ensembles get fewer samples and the verdicts say the power that leaves.
  */
 const SAMPLES_AT_BUDGET_ONE = {
-  real: { spectral: 1000, weighted: 150 },
-  complex: { spectral: 600, weighted: 120 },
+  real: { spectral: 1000, weighted: 160 },
+  complex: { spectral: 600, weighted: 128 },
 } as const;
 /**
  * Fewest samples behind a weighted covariance, whatever the budget: with 30 the delta-method error
  * of a covariance of heavy-tailed products is too often underestimated (the 100-seed false-alarm
- * test saw 3 failing seeds at α = 10⁻³, all weighted checks); 60 keeps the normal approximation honest.
+ * test saw 3 failing seeds at α = 10⁻³, all weighted checks); 60 keeps the normal approximation honest
+ * (64: the next whole number of batches).
  */
-const MINIMUM_WEIGHTED_SAMPLES = 60;
+const MINIMUM_WEIGHTED_SAMPLES = 64;
 /** Fewest samples behind the other checks (joint cumulants of order 4 need them for their jackknife errors). */
 const MINIMUM_SPECTRAL_SAMPLES = 100;
 /** From this budget on, the sixth-order Wick check is added (it needs many samples to have power). */
 export const SIXTH_ORDER_BUDGET = 2;
 
+/** Samples per sample_statistics request: bounds memory and message size; divides every block of sampled-work.ts. */
+export const STATISTICS_BATCH = 16;
+
+/**
+ * Spectral and weighted sample counts at a budget. The weighted count is a whole number of
+ * sample_statistics batches, so that batch b is always samples [16b, 16b + 16) of one tier and its
+ * seed depends on b alone (any block of samples can then be asked for on its own).
+ */
 export function sampleCounts(field: Field, budget: number): { spectral: number; weighted: number } {
   const base = SAMPLES_AT_BUDGET_ONE[field];
   const spectral = Math.max(MINIMUM_SPECTRAL_SAMPLES, Math.round(base.spectral * budget));
-  return { spectral, weighted: Math.min(spectral, Math.max(MINIMUM_WEIGHTED_SAMPLES, Math.round(base.weighted * budget))) };
+  const weighted = Math.ceil(Math.max(MINIMUM_WEIGHTED_SAMPLES, Math.round(base.weighted * budget)) / STATISTICS_BATCH) * STATISTICS_BATCH;
+  return { spectral, weighted: Math.min(spectral, weighted) };
 }
 
 /**

@@ -1,11 +1,11 @@
-import type { CheckFinding, CheckGroup } from '../../harness/check-group.js';
+import type { CheckGroup, SampledGroup } from '../../harness/check-group.js';
 import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { RunSettings } from '../../harness/run-settings.js';
 import type { PowerContext } from './detection-power.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { sampleCounts, SIXTH_ORDER_BUDGET } from './fluctuation-design.js';
 import { observedAgainstPredicted, standardisedFluctuations, withExhibit } from './fluctuation-exhibits.js';
-import { gatherFluctuationSamples } from './fluctuation-samples.js';
+import { combineFluctuationRows, fluctuationSamplesOf, observeFluctuationBlock, type FluctuationRows } from './fluctuation-samples.js';
 import { linearStatisticChecks, meanCorrectionChecks } from './linear-statistic-checks.js';
 import { mesoscopicChecks } from './mesoscopic-checks.js';
 import { identityChainChecks, tracialChecks, weightedChecks } from './resolvent-checks.js';
@@ -37,7 +37,7 @@ export function fluctuationGroup(
   const label = ensembleLabel(ensemble);
   return {
     statisticalChecks: checks.filter((c) => c.statistical).length,
-    group: (power) => ({
+    group: (power): SampledGroup<FluctuationRows> => ({
       id,
       suite: 'fluctuations',
       checks: checks.map((c) => ({
@@ -46,8 +46,12 @@ export function fluctuationGroup(
         parameters: { ensemble: label, N: book.size, samples: counts.spectral, weightedSamples: counts.weighted, ...c.parameters },
       })),
       skipReason: fluctuationSkipReason,
-      async run(context): Promise<CheckFinding[]> {
-        const samples = await gatherFluctuationSamples(context, id, ensemble, book, counts.spectral, counts.weighted);
+      work: {
+        setSizes: [counts.spectral],
+        observe: (context, _set, start, end) => observeFluctuationBlock(context, id, ensemble, book, counts, start, end),
+        combine: combineFluctuationRows,
+        conclude(_context, [rows]) {
+        const samples = fluctuationSamplesOf(rows, counts.spectral, counts.weighted);
         const findings = checks.map((c) => c.evaluate(samples, power));
         // Pictures for the report: all of the group's checks observed against predicted on the
         // first, and the Gaussian shape of the first statistic on the check that uses it.
@@ -56,6 +60,7 @@ export function fluctuationGroup(
         const gaussian = checks.findIndex((c) => c.shows !== undefined);
         if (gaussian >= 0) findings[gaussian] = withExhibit(findings[gaussian], standardisedFluctuations(samples, checks[gaussian].shows!));
         return findings;
+        },
       },
     }),
   };

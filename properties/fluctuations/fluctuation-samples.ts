@@ -4,10 +4,9 @@ import type { Complex } from '../../harness/numeric/complex.js';
 import { chainStatistics } from '../../harness/numeric/chain-statistics.js';
 import { ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import { matrixSource } from '../support/matrix-source.js';
+import { STATISTICS_BATCH } from './fluctuation-design.js';
 import type { Statistic, StatisticBook, Tier } from './statistic-book.js';
 
-/** Samples per sampleStatistics request: bounds memory and message size. */
-const STATISTICS_BATCH = 16;
 
 /**
  * The observed Tr statistics N⟨chain⟩ of every chain of a book, sample by sample in the order the
@@ -54,69 +53,100 @@ export class FluctuationSamples {
 }
 
 /**
- * Gathers the samples behind the fluctuation checks of one ensemble and size, by the path the
- * issue prescribes:
- * - the implementation offers sample_statistics: its values are what is tested;
+ * The Tr statistics of one block of samples [start, end), chain by chain (complex interleaved;
+ * weighted chains only on the samples of the block below the weighted count), and the path they
+ * came by. Plain data: it crosses to a worker thread or into a shard file unchanged.
+ */
+export interface FluctuationRows {
+  readonly columns: readonly Float64Array[];
+  readonly path: string;
+  readonly origin: 'sample_statistics' | 'sampler';
+}
+
+/** The rows of two consecutive blocks, left then right. */
+export function combineFluctuationRows(left: FluctuationRows, right: FluctuationRows): FluctuationRows {
+  return {
+    path: left.path,
+    origin: left.origin,
+    columns: left.columns.map((l, c) => {
+      const r = right.columns[c];
+      const out = new Float64Array(l.length + r.length);
+      out.set(l);
+      out.set(r, l.length);
+      return out;
+    }),
+  };
+}
+
+/** The samples of a whole run from its combined rows. */
+export function fluctuationSamplesOf(rows: FluctuationRows, spectralCount: number, weightedCount: number): FluctuationSamples {
+  return new FluctuationSamples(rows.columns, spectralCount, weightedCount, rows.path, rows.origin);
+}
+
+/**
+ * Observes the samples [start, end) behind the fluctuation checks of one ensemble and size, by the
+ * path the issue prescribes:
+ * - the implementation offers sample_statistics: its values are what is tested (batch b, samples
+ *   [16b, 16b + 16), is asked for with the seed derived for b);
  * - else it offers a sampler: its matrices, with every statistic computed by the harness's engine
  *   from one decomposition per matrix (so the sampler is what is tested; the implementation's
  *   per-matrix routines are the identities suite's business);
  * - else nothing of it would be exercised, and the checks are skipped (the group's skipReason; NotAvailable here).
  */
-export async function gatherFluctuationSamples(
+export async function observeFluctuationBlock(
   context: CheckContext,
   key: string,
   ensemble: EnsembleSpec,
   book: StatisticBook,
-  spectralCount: number,
-  weightedCount: number,
-): Promise<FluctuationSamples> {
+  counts: { readonly spectral: number; readonly weighted: number },
+  start: number,
+  end: number,
+): Promise<FluctuationRows> {
   const size = book.size;
-  const columns = book.chains.map((c) => new Float64Array(2 * (c.tier === 'weighted' ? weightedCount : spectralCount)));
+  const { spectral: spectralCount, weighted: weightedCount } = counts;
+  const weightedEnd = Math.max(start, Math.min(end, weightedCount));
+  const columns = book.chains.map((c) => new Float64Array(2 * ((c.tier === 'weighted' ? weightedEnd : end) - start)));
   const positions = { spectral: book.positionsFor('spectral'), weighted: book.positionsFor('weighted') };
   const store = (k: number, tier: Tier, values: readonly Complex[]) => {
     const at = positions[tier];
+    const row = k - start;
     for (let c = 0; c < columns.length; c++) {
       if (at[c] < 0) continue;
-      columns[c][2 * k] = size * values[at[c]].re;
-      columns[c][2 * k + 1] = size * values[at[c]].im;
+      columns[c][2 * row] = size * values[at[c]].re;
+      columns[c][2 * row + 1] = size * values[at[c]].im;
     }
   };
   const tierOf = (k: number): Tier => (k < weightedCount ? 'weighted' : 'spectral');
   const sampleStatistics = context.adapter.sampleStatistics;
   if (context.capabilities.has('sample_statistics') && sampleStatistics !== undefined) {
-    let k = 0;
-    for (let batch = 0; k < spectralCount; batch++) {
+    if (start % STATISTICS_BATCH !== 0) throw new RangeError(`observeFluctuationBlock: ${start} does not start a batch`);
+    for (let k = start; k < end; ) {
       const tier = tierOf(k);
-      const end = tier === 'weighted' ? weightedCount : spectralCount;
-      const count = Math.min(STATISTICS_BATCH, end - k);
+      const count = Math.min(STATISTICS_BATCH, (tier === 'weighted' ? weightedCount : spectralCount) - k, end - k);
       const chains: ChainSpec[] = book.chainsFor(tier);
-      const rows = await sampleStatistics.call(context.adapter, ensemble, size, context.derivedSeed(key, batch), count, chains);
+      const rows = await sampleStatistics.call(context.adapter, ensemble, size, context.derivedSeed(key, k / STATISTICS_BATCH), count, chains);
       for (const row of rows) store(k++, tier, row);
     }
-    return new FluctuationSamples(
+    return {
       columns,
-      spectralCount,
-      weightedCount,
-      `statistics: implementation's sample_statistics (${ensembleLabel(ensemble)}, N = ${size}, ${spectralCount} samples, the first ${weightedCount} with weighted chains)`,
-      'sample_statistics',
-    );
+      path: `statistics: implementation's sample_statistics (${ensembleLabel(ensemble)}, N = ${size}, ${spectralCount} samples, the first ${weightedCount} with weighted chains)`,
+      origin: 'sample_statistics',
+    };
   }
   if (!context.capabilities.has('sample')) {
     // An adapter that declares sample_statistics without the method (one written before it existed).
     throw new NotAvailable('the adapter declares sample_statistics but has no sampleStatistics method, and offers no sampler');
   }
-  const source = await matrixSource(context, key, ensemble, size, spectralCount, true);
+  const source = await matrixSource(context, key, ensemble, size, spectralCount, true, { start, end });
   const chainsByTier = { spectral: book.chainsFor('spectral'), weighted: book.chainsFor('weighted') };
-  let k = 0;
+  let k = start;
   for await (const matrix of source.matrices) {
     const tier = tierOf(k);
     store(k++, tier, chainStatistics(matrix, chainsByTier[tier]));
   }
-  return new FluctuationSamples(
+  return {
     columns,
-    spectralCount,
-    weightedCount,
-    `matrices: ${source.description}; statistics: reference engine (one decomposition per matrix; eigenvectors for the first ${weightedCount}), so the sampler is what is tested; the implementation's per-matrix routines are the identities suite's business`,
-    'sampler',
-  );
+    path: `matrices: ${source.description}; statistics: reference engine (one decomposition per matrix; eigenvectors for the first ${weightedCount}), so the sampler is what is tested; the implementation's per-matrix routines are the identities suite's business`,
+    origin: 'sampler',
+  };
 }

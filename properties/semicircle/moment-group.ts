@@ -1,4 +1,4 @@
-import type { CheckFinding, CheckGroup } from '../../harness/check-group.js';
+import type { SampledGroup } from '../../harness/check-group.js';
 import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { RunSettings } from '../../harness/run-settings.js';
 import { toleranceTest } from '../../harness/tolerance-test.js';
@@ -8,8 +8,15 @@ import { builtInTable } from '../../reference-values/reference-table-catalog.js'
 import { semicircleEvenMoment } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
-import { RunningMeans } from '../support/running-means.js';
-import { SpectralHistogram } from '../support/spectral-histogram.js';
+import { addToMeanTally, combineMeanTallies, emptyMeanTally, standardErrorOfMean, type MeanTally } from '../support/running-means.js';
+import {
+  addSpectrum,
+  combineSpectralHistograms,
+  emptySpectralHistogram,
+  histogramBinEdges,
+  histogramDensity,
+  type SpectralHistogram,
+} from '../support/spectral-histogram.js';
 import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from '../support/spectral-statistics.js';
 
 /** Moments E⟨H^{2k}⟩ for k = 1 … MAX_K. */
@@ -61,7 +68,7 @@ export function evenMomentReference(ensemble: EnsembleSpec, size: number, k: num
 }
 
 /** E⟨H^{2k}⟩, k = 1 … 4, from the spectra of K matrices. */
-export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunSettings): CheckGroup {
+export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunSettings): SampledGroup<MomentPart> {
   const label = ensembleLabel(ensemble);
   const id = `semicircle/even-moments/${label}/N=${size}`;
   const ks = Array.from({ length: MAX_K }, (_, i) => i + 1);
@@ -74,51 +81,68 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
       parameters: { ensemble: label, N: size, moment: 2 * k, samples: settings.samples },
     })),
     skipReason: (capabilities) => nothingToExercise(capabilities, 'eigenvalues'),
-    async run(context): Promise<CheckFinding[]> {
-      const source = await matrixSource(context, id, ensemble, size, settings.samples, false);
-      const sums = new RunningMeans(MAX_K);
-      const row = new Float64Array(MAX_K);
-      const histogram = new SpectralHistogram();
-      for await (const matrix of source.matrices) {
-        const values = await spectrumOf(context, matrix);
-        histogram.add(values);
-        row.fill(0);
-        for (const lambda of values) {
-          const l2 = lambda * lambda;
-          let power = 1;
-          for (let k = 0; k < MAX_K; k++) {
-            power *= l2;
-            row[k] += power;
+    work: {
+      setSizes: [settings.samples],
+      async observe(context, _set, start, end) {
+        const source = await matrixSource(context, id, ensemble, size, settings.samples, false, { start, end });
+        let sums = emptyMeanTally(MAX_K);
+        const row = new Float64Array(MAX_K);
+        let histogram = emptySpectralHistogram();
+        for await (const matrix of source.matrices) {
+          const values = await spectrumOf(context, matrix);
+          histogram = addSpectrum(histogram, values);
+          row.fill(0);
+          for (const lambda of values) {
+            const l2 = lambda * lambda;
+            let power = 1;
+            for (let k = 0; k < MAX_K; k++) {
+              power *= l2;
+              row[k] += power;
+            }
           }
+          for (let k = 0; k < MAX_K; k++) row[k] /= size;
+          sums = addToMeanTally(sums, row);
         }
-        for (let k = 0; k < MAX_K; k++) row[k] /= size;
-        sums.add(row);
-      }
-      const path = pathDescription(source.description, 'eigenvalues', eigenvalueOrigin(context));
-      const exhibit = {
-        kind: 'spectral-histogram' as const,
-        binEdges: histogram.binEdges(),
-        density: histogram.density(),
-        label: `eigenvalues of ${sums.count} matrices (${label}, N = ${size}) against the semicircle density`,
-      };
-      return ks.map((k) => {
-        const reference = evenMomentReference(ensemble, size, k);
-        return {
-          state: 'measured',
-          path,
-          ...(k === 1 ? { exhibit } : {}),
-          evidence: toleranceTest({
-            observed: sums.meanOf(k - 1),
-            expected: reference.value,
-            expectedSource: reference.source,
-            standardError: sums.standardErrorOf(k - 1),
-            standardErrorMethod: `sample standard deviation / √K over K = ${sums.count} independent matrices`,
-            allowance: reference.allowance,
-            allowanceReason: reference.allowanceReason,
-            sampleCount: sums.count,
-          }),
+        return { path: pathDescription(source.description, 'eigenvalues', eigenvalueOrigin(context)), sums, histogram };
+      },
+      combine: (left, right) => ({
+        path: left.path,
+        sums: combineMeanTallies(left.sums, right.sums),
+        histogram: combineSpectralHistograms(left.histogram, right.histogram),
+      }),
+      conclude(_context, [{ path, sums, histogram }]) {
+        const exhibit = {
+          kind: 'spectral-histogram' as const,
+          binEdges: histogramBinEdges(histogram),
+          density: histogramDensity(histogram),
+          label: `eigenvalues of ${sums.count} matrices (${label}, N = ${size}) against the semicircle density`,
         };
-      });
+        return ks.map((k) => {
+          const reference = evenMomentReference(ensemble, size, k);
+          return {
+            state: 'measured',
+            path,
+            ...(k === 1 ? { exhibit } : {}),
+            evidence: toleranceTest({
+              observed: sums.mean[k - 1],
+              expected: reference.value,
+              expectedSource: reference.source,
+              standardError: standardErrorOfMean(sums, k - 1),
+              standardErrorMethod: `sample standard deviation / √K over K = ${sums.count} independent matrices`,
+              allowance: reference.allowance,
+              allowanceReason: reference.allowanceReason,
+              sampleCount: sums.count,
+            }),
+          };
+        });
+      },
     },
   };
+}
+
+/** A block's tally: the moments' means, the pooled spectrum, and where they came from. */
+interface MomentPart {
+  readonly path: string;
+  readonly sums: MeanTally;
+  readonly histogram: SpectralHistogram;
 }

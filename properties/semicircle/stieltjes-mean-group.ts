@@ -1,4 +1,4 @@
-import type { CheckGroup, CheckFinding } from '../../harness/check-group.js';
+import type { SampledGroup } from '../../harness/check-group.js';
 import { abs, add, formatComplex, scale, sub, mul, type Complex } from '../../harness/numeric/complex.js';
 import { ensembleConstants, ensembleLabel, type EnsembleSpec } from '../../harness/numeric/ensemble.js';
 import type { RunSettings } from '../../harness/run-settings.js';
@@ -7,7 +7,7 @@ import { resolventMeanCorrection } from '../../reference-values/finite-n-correct
 import { stieltjesSemicircle } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
-import { RunningMeans } from '../support/running-means.js';
+import { addToMeanTally, combineMeanTallies, emptyMeanTally, standardErrorOfMean, type MeanTally } from '../support/running-means.js';
 import { drawSpectralParameters } from '../support/spectral-parameter-arbitraries.js';
 import { nothingToExercise, normalisedResolventTracesOf, pathDescription, resolventOrigin } from '../support/spectral-statistics.js';
 
@@ -48,10 +48,11 @@ const EXPECTED_SOURCE =
  * in the bulk, near the edge and outside the spectrum, in both half-planes, with Im z from order
  * one down to the mesoscopic scale.
  */
-export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, settings: RunSettings): CheckGroup {
+export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, settings: RunSettings): SampledGroup<StieltjesPart> {
   const label = ensembleLabel(ensemble);
   const id = `semicircle/stieltjes-mean/${label}/N=${size}`;
   const drawn = drawSpectralParameters(settings.seed ^ size, size, POINTS_PER_REGION);
+  const points = drawn.map((d) => d.z);
   return {
     id,
     suite: 'semicircle',
@@ -61,34 +62,45 @@ export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, setting
       parameters: { ensemble: label, N: size, z: formatComplex(z), region, samples: settings.samples },
     })),
     skipReason: (capabilities) => nothingToExercise(capabilities, 'resolvent_trace'),
-    async run(context): Promise<CheckFinding[]> {
-      const points = drawn.map((d) => d.z);
-      const source = await matrixSource(context, id, ensemble, size, settings.samples, false);
-      const sums = new RunningMeans(2 * points.length);
-      const row = new Float64Array(2 * points.length);
-      for await (const matrix of source.matrices) {
-        const traces = await normalisedResolventTracesOf(context, matrix, points);
-        traces.forEach((t, j) => {
-          row[2 * j] = t.re;
-          row[2 * j + 1] = t.im;
-        });
-        sums.add(row);
-      }
-      const path = pathDescription(source.description, 'resolvent_trace', resolventOrigin(context));
-      return points.map((z, j) => ({
-        state: 'measured',
-        path,
-        evidence: toleranceTest({
-          observed: { re: sums.meanOf(2 * j), im: sums.meanOf(2 * j + 1) },
-          expected: expectedStieltjesMean(z, ensemble, size),
-          expectedSource: EXPECTED_SOURCE,
-          standardError: { re: sums.standardErrorOf(2 * j), im: sums.standardErrorOf(2 * j + 1) },
-          standardErrorMethod: `sample standard deviation / √K over K = ${sums.count} independent matrices, per component`,
-          allowance: stieltjesRemainderAllowance(z, ensemble, size),
-          allowanceReason: 'remainder of the 1/N expansion, 8|m|³ε²/|1 − m²|⁵ with ε = 1/N (max(1/N, 1/d) if sparse), calibrated by simulation',
-          sampleCount: sums.count,
-        }),
-      }));
+    work: {
+      setSizes: [settings.samples],
+      async observe(context, _set, start, end) {
+        const source = await matrixSource(context, id, ensemble, size, settings.samples, false, { start, end });
+        let sums = emptyMeanTally(2 * points.length);
+        const row = new Float64Array(2 * points.length);
+        for await (const matrix of source.matrices) {
+          const traces = await normalisedResolventTracesOf(context, matrix, points);
+          traces.forEach((t, j) => {
+            row[2 * j] = t.re;
+            row[2 * j + 1] = t.im;
+          });
+          sums = addToMeanTally(sums, row);
+        }
+        return { path: pathDescription(source.description, 'resolvent_trace', resolventOrigin(context)), sums };
+      },
+      combine: (left, right) => ({ path: left.path, sums: combineMeanTallies(left.sums, right.sums) }),
+      conclude(_context, [{ path, sums }]) {
+        return points.map((z, j) => ({
+          state: 'measured',
+          path,
+          evidence: toleranceTest({
+            observed: { re: sums.mean[2 * j], im: sums.mean[2 * j + 1] },
+            expected: expectedStieltjesMean(z, ensemble, size),
+            expectedSource: EXPECTED_SOURCE,
+            standardError: { re: standardErrorOfMean(sums, 2 * j), im: standardErrorOfMean(sums, 2 * j + 1) },
+            standardErrorMethod: `sample standard deviation / √K over K = ${sums.count} independent matrices, per component`,
+            allowance: stieltjesRemainderAllowance(z, ensemble, size),
+            allowanceReason: 'remainder of the 1/N expansion, 8|m|³ε²/|1 − m²|⁵ with ε = 1/N (max(1/N, 1/d) if sparse), calibrated by simulation',
+            sampleCount: sums.count,
+          }),
+        }));
+      },
     },
   };
+}
+
+/** A block's tally: the means of Re and Im ⟨G(z)⟩ at each point, and where the statistics came from. */
+interface StieltjesPart {
+  readonly path: string;
+  readonly sums: MeanTally;
 }

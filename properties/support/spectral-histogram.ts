@@ -1,40 +1,48 @@
 /**
  * A histogram of eigenvalues pooled over samples, on fixed bins over [−limit, limit]; values
- * outside fall into the outermost bins' tally of `outside`. Streaming: add one spectrum at a time.
+ * outside fall into `outside`. Plain data: a block's histogram crosses to a worker thread or into
+ * a shard file unchanged, and histograms of disjoint samples add (exactly: the counts are integers).
  */
-export class SpectralHistogram {
-  private readonly counts: Float64Array;
-  private total = 0;
-  private outside = 0;
+export interface SpectralHistogram {
+  readonly limit: number;
+  readonly counts: Float64Array;
+  readonly total: number;
+  readonly outside: number;
+}
 
-  constructor(
-    readonly limit = 2.5,
-    readonly bins = 50,
-  ) {
-    this.counts = new Float64Array(bins);
-  }
+export function emptySpectralHistogram(limit = 2.5, bins = 50): SpectralHistogram {
+  return { limit, counts: new Float64Array(bins), total: 0, outside: 0 };
+}
 
-  add(eigenvalues: ArrayLike<number>): void {
-    const width = (2 * this.limit) / this.bins;
-    for (let i = 0; i < eigenvalues.length; i++) {
-      const k = Math.floor((eigenvalues[i] + this.limit) / width);
-      if (k >= 0 && k < this.bins) this.counts[k]++;
-      else this.outside++;
-      this.total++;
-    }
+/** The histogram with one more spectrum; counts are updated in place. */
+export function addSpectrum(histogram: SpectralHistogram, eigenvalues: ArrayLike<number>): SpectralHistogram {
+  const { limit, counts } = histogram;
+  const width = (2 * limit) / counts.length;
+  let outside = histogram.outside;
+  for (let i = 0; i < eigenvalues.length; i++) {
+    const k = Math.floor((eigenvalues[i] + limit) / width);
+    if (k >= 0 && k < counts.length) counts[k]++;
+    else outside++;
   }
+  return { limit, counts, total: histogram.total + eigenvalues.length, outside };
+}
 
-  binEdges(): number[] {
-    return Array.from({ length: this.bins + 1 }, (_, k) => -this.limit + (2 * this.limit * k) / this.bins);
-  }
+export function combineSpectralHistograms(left: SpectralHistogram, right: SpectralHistogram): SpectralHistogram {
+  return {
+    limit: left.limit,
+    counts: left.counts.map((c, k) => c + right.counts[k]),
+    total: left.total + right.total,
+    outside: left.outside + right.outside,
+  };
+}
 
-  /** Counts per bin over (total · bin width): comparable with a density. */
-  density(): number[] {
-    const width = (2 * this.limit) / this.bins;
-    return Array.from(this.counts, (c) => (this.total > 0 ? c / (this.total * width) : 0));
-  }
+export function histogramBinEdges(histogram: SpectralHistogram): number[] {
+  const { limit, counts } = histogram;
+  return Array.from({ length: counts.length + 1 }, (_, k) => -limit + (2 * limit * k) / counts.length);
+}
 
-  get fractionOutside(): number {
-    return this.total > 0 ? this.outside / this.total : 0;
-  }
+/** Counts per bin over (total · bin width): comparable with a density. */
+export function histogramDensity(histogram: SpectralHistogram): number[] {
+  const width = (2 * histogram.limit) / histogram.counts.length;
+  return Array.from(histogram.counts, (c) => (histogram.total > 0 ? c / (histogram.total * width) : 0));
 }

@@ -1,4 +1,4 @@
-import type { CheckContext } from '../../harness/check-group.js';
+import type { CheckContext, ConcludeContext } from '../../harness/check-group.js';
 import type { Complex } from '../../harness/numeric/complex.js';
 import { eigenvalues } from '../../harness/numeric/eigen.js';
 import { normalisedResolventTrace } from '../../harness/numeric/resolvent-statistics.js';
@@ -8,11 +8,11 @@ import type { SquareMatrix } from '../../harness/numeric/square-matrix.js';
  * Per-matrix statistics, from the implementation's routine when it offers one, else from the
  * harness's reference engine (then only the matrices, i.e. the sampler, are under test).
  */
-export function eigenvalueOrigin(context: CheckContext): 'implementation' | 'harness' {
+export function eigenvalueOrigin(context: ConcludeContext): 'implementation' | 'harness' {
   return context.capabilities.has('eigenvalues') ? 'implementation' : 'harness';
 }
 
-export function resolventOrigin(context: CheckContext): 'implementation' | 'harness' {
+export function resolventOrigin(context: ConcludeContext): 'implementation' | 'harness' {
   return context.capabilities.has('resolvent_trace') ? 'implementation' : 'harness';
 }
 
