@@ -8,6 +8,7 @@ import { BASELINE_RECORD_OPTIONS } from './baseline-options.js';
 import { runCheckCommand, type CheckArguments } from './check-command.js';
 import { runCompareCommand, type CompareArguments } from './compare-command.js';
 import { COMPARE_OPTIONS } from './compare-options.js';
+import { MERGE_OPTIONS, runMergeCommand, type MergeArguments } from './merge-command.js';
 import { CONFIG_FILE_OPTIONS } from './config-file.js';
 import { withConfiguration } from './configured-arguments.js';
 import { declareOptions } from './declare-options.js';
@@ -56,6 +57,14 @@ async function main(argv: string[]): Promise<number> {
       (y) => declareOptions(y, COMPARE_OPTIONS),
       async (args) => {
         exitCode = await runCompareCommand(args as unknown as CompareArguments, process.stdout);
+      },
+    )
+    .command(
+      'merge <files..>',
+      'combine the shard files of one run (check --shard I/N, all N of them) into its report, the same bit for bit as the run in one piece; exit 0 all passed, 1 a check failed, 2 bad usage',
+      (y) => declareOptions(y.positional('files', { type: 'string', array: true, describe: 'the shard files' }), MERGE_OPTIONS),
+      async (args) => {
+        exitCode = await runMergeCommand(args as unknown as MergeArguments, process.stdout);
       },
     )
     .command(
@@ -131,7 +140,7 @@ async function main(argv: string[]): Promise<number> {
           .strict(),
       () => undefined,
     )
-    .demandCommand(1, 'name a command: check, compare, baseline or reference')
+    .demandCommand(1, 'name a command: check, merge, compare, baseline or reference')
     .fail((message, error) => {
       if (error instanceof UsageError) fail(error.message);
       if (error) throw error;

@@ -86,6 +86,21 @@ export const CHECK_OPTIONS = {
     group: 'Run',
   },
   only: { type: 'string', array: true, describe: 'run only the check with this id (repeatable)', group: 'Run' },
+  workers: {
+    type: 'number',
+    describe: 'worker threads that sample and compute statistics, each with its own adapter (default: one per core); the report is the same to the last bit whatever the number',
+    group: 'Run',
+  },
+  shard: {
+    type: 'string',
+    describe: "run only part I of N of the samples (e.g. 2/4) and write a shard file instead of a report; 'rmt-assay merge' combines the N files into the report of the whole run",
+    group: 'Run',
+  },
+  'shard-file': {
+    type: 'string',
+    describe: 'where --shard writes its part (default: shard-I-of-N.json)',
+    group: 'Output',
+  },
   case: {
     type: 'string',
     describe: "replay one randomised case of the check named by --only (fast-check's path, from a replay command)",
