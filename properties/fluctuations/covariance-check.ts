@@ -2,6 +2,7 @@ import type { Complex } from '../../harness/numeric/complex.js';
 import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
 import { nonGaussianFactor } from './fluctuation-allowances.js';
 import { summedCovarianceFinding } from './fluctuation-evidence.js';
+import type { Estimand } from './estimand.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import type { Statistic } from './statistic-book.js';
 
@@ -42,11 +43,13 @@ export function summedCovarianceCheck(
   expectedSource: string,
   allowance: Allowance,
 ): FluctuationCheck {
+  const estimand: Estimand = { kind: 'covariance', pairs };
   return {
     name,
     title,
     statistical: true,
-    evaluate: (samples, power) =>
-      summedCovarianceFinding(samples, pairs, { expected, expectedSource, allowanceFactor: allowance.factor, allowanceReason: allowance.reason }, power),
+    estimands: [estimand],
+    evaluate: (tally, power) =>
+      summedCovarianceFinding(tally, estimand, { expected, expectedSource, allowanceFactor: allowance.factor, allowanceReason: allowance.reason }, power),
   };
 }

@@ -1,11 +1,13 @@
 import type { CheckFinding } from '../../harness/check-group.js';
 import type { PowerContext } from './detection-power.js';
-import type { FluctuationSamples } from './fluctuation-samples.js';
+import type { Estimand } from './estimand.js';
+import type { TallyView } from './fluctuation-tally.js';
 import type { Statistic } from './statistic-book.js';
 
 /**
  * One check of a fluctuation group: planned before the run (its statistics are registered in the
- * group's StatisticBook then), evaluated on the group's shared samples.
+ * group's StatisticBook then, and what it estimates from them is declared), evaluated on the
+ * group's reduced samples.
  */
 export interface FluctuationCheck {
   /** Appended to the group's id. */
@@ -16,5 +18,7 @@ export interface FluctuationCheck {
   readonly statistical: boolean;
   /** A statistic whose standardised fluctuations the check's verdict shows (a normal quantile plot). */
   readonly shows?: Statistic;
-  evaluate(samples: FluctuationSamples, power: PowerContext): CheckFinding;
+  /** What it estimates; the samples are reduced to these as they come. */
+  readonly estimands: readonly Estimand[];
+  evaluate(tally: TallyView, power: PowerContext): CheckFinding;
 }

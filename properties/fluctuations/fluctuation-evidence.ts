@@ -1,13 +1,15 @@
 import type { CheckFinding } from '../../harness/check-group.js';
-import { complexMean, summedBilinearCovariance } from '../../harness/estimators/bilinear-covariance.js';
-import { jointCumulant } from '../../harness/estimators/joint-cumulant.js';
-import { lagOneAutocorrelation } from '../../harness/estimators/lag-one-autocorrelation.js';
+import { complexMean } from '../../harness/estimators/bilinear-covariance.js';
+import { estimateAutocorrelation, type StreamingAutocorrelation } from '../../harness/estimators/streaming-autocorrelation.js';
+import { covarianceNaturalScale, estimateCovariance, type StreamingCovariance } from '../../harness/estimators/streaming-bilinear-covariance.js';
+import { cumulantNaturalScale, estimateCumulant, type StreamingCumulant } from '../../harness/estimators/streaming-joint-cumulant.js';
+import { estimateMean, type StreamingMean } from '../../harness/estimators/streaming-mean.js';
 import { abs, type Complex } from '../../harness/numeric/complex.js';
 import type { Quantity, StatisticalEvidence } from '../../harness/evidence.js';
 import { toleranceTest } from '../../harness/tolerance-test.js';
 import { detectableRelativeError, type PowerContext } from './detection-power.js';
-import type { FluctuationSamples } from './fluctuation-samples.js';
-import type { Statistic } from './statistic-book.js';
+import type { Estimand } from './estimand.js';
+import type { TallyView } from './fluctuation-tally.js';
 
 /** The reference a check is held against, and its finite-N allowance in units of the statistic's size. */
 export interface Reference {
@@ -18,7 +20,7 @@ export interface Reference {
   readonly allowanceReason: string;
 }
 
-/** E|X − EX|², estimated: the natural size of a statistic's covariances. */
+/** E|X − EX|², estimated from a column of samples (complex interleaved): the natural size of a statistic's covariances. */
 export function meanSquare(x: Float64Array): number {
   const n = x.length / 2;
   const [re, im] = complexMean(x);
@@ -28,10 +30,10 @@ export function meanSquare(x: Float64Array): number {
 }
 
 /** A measured finding with its power statement. */
-function measured(samples: FluctuationSamples, evidence: StatisticalEvidence, standardError: Quantity, scale: number, power: PowerContext): CheckFinding {
+function measured(tally: TallyView, evidence: StatisticalEvidence, standardError: Quantity, scale: number, power: PowerContext): CheckFinding {
   return {
     state: 'measured',
-    path: samples.path,
+    path: tally.path,
     evidence: { ...evidence, detectableRelativeError: detectableRelativeError(evidence.allowance, standardError, scale, power) },
   };
 }
@@ -43,73 +45,47 @@ function powerScale(expected: Complex, natural: number): number {
 }
 
 /**
- * Cov(X, Y) (bilinear) estimated over the samples both are observed on, against the reference.
- * The allowance is relative to √(E|X − EX|² E|Y − EY|²) as estimated from the same samples (a
- * deviation of the variance itself changes it by a factor 1 + O(allowanceFactor) only).
+ * Σ_j Cov(X_j, Y_j) (bilinear) over the samples the pairs are observed on, against the reference.
+ * The allowance is relative to Σ_j √(E|X_j − EX_j|² E|Y_j − EY_j|²) as estimated from the same
+ * samples (a deviation of the variance itself changes it by a factor 1 + O(allowanceFactor) only).
  */
-export function covarianceFinding(samples: FluctuationSamples, x: Statistic, y: Statistic, reference: Reference, power: PowerContext): CheckFinding {
-  return summedCovarianceFinding(samples, [[x, y]], reference, power);
-}
-
-/** Σ_j Cov(X_j, Y_j) against the reference; the natural scale is Σ_j √(E|X_j − EX_j|² E|Y_j − EY_j|²). */
-export function summedCovarianceFinding(
-  samples: FluctuationSamples,
-  pairs: ReadonlyArray<readonly [Statistic, Statistic]>,
-  reference: Reference,
-  power: PowerContext,
-): CheckFinding {
-  const columns = pairs.map(([x, y]) => samples.columnsOnCommonSamples([x, y]) as [Float64Array, Float64Array]);
-  const c = summedBilinearCovariance(columns);
-  const natural = columns.reduce((sum, [cx, cy]) => sum + Math.sqrt(meanSquare(cx) * meanSquare(cy)), 0);
+export function summedCovarianceFinding(tally: TallyView, estimand: Estimand & { kind: 'covariance' }, reference: Reference, power: PowerContext): CheckFinding {
+  const state = tally.state<StreamingCovariance>(estimand);
+  const c = estimateCovariance(state);
+  const natural = covarianceNaturalScale(state);
   const allowance = reference.allowanceFactor * natural;
+  const several = estimand.pairs.length > 1;
   const evidence = toleranceTest({
     observed: c.estimate,
     expected: reference.expected,
     expectedSource: reference.expectedSource,
     standardError: c.standardError,
-    standardErrorMethod: `delta method: standard deviation of the centred products (X − X̄)(Y − Ȳ)${pairs.length > 1 ? ', summed over the pairs,' : ''} over √K, K = ${c.count} independent samples, per component`,
+    standardErrorMethod: `delta method over the streamed co-moments of (X, Y, XY)${several ? ' of every pair' : ''}: the standard deviation of the centred products${several ? ', summed over the pairs,' : ''} over √K, K = ${c.count} independent samples, per component`,
     allowance,
-    allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × ${pairs.length > 1 ? 'Σ ' : ''}√(E|X − EX|² E|Y − EY|²) = ${allowance.toPrecision(3)})`,
+    allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × ${several ? 'Σ ' : ''}√(E|X − EX|² E|Y − EY|²) = ${allowance.toPrecision(3)})`,
     sampleCount: c.count,
   });
-  return measured(samples, evidence, c.standardError, powerScale(reference.expected, natural), power);
+  return measured(tally, evidence, c.standardError, powerScale(reference.expected, natural), power);
 }
 
 /**
- * E[X] against the reference (a mean correction, E Tr f(H) − N∫fρ); X is the statistic minus the
- * given centring (N∫fρ). The allowance factor is relative to the statistic's standard deviation.
+ * E[X] − c against the reference (a mean correction, E Tr f(H) − N∫fρ, with c = N∫fρ). The
+ * allowance factor is relative to the statistic's standard deviation.
  */
-export function meanFinding(samples: FluctuationSamples, x: Statistic, centring: Complex, reference: Reference, power: PowerContext): CheckFinding {
-  const cx = samples.column(x);
-  const n = cx.length / 2;
-  let re = 0;
-  let im = 0;
-  for (let k = 0; k < n; k++) {
-    re += cx[2 * k] - centring.re;
-    im += cx[2 * k + 1] - centring.im;
-  }
-  re /= n;
-  im /= n;
-  let sr = 0;
-  let si = 0;
-  for (let k = 0; k < n; k++) {
-    sr += (cx[2 * k] - centring.re - re) ** 2;
-    si += (cx[2 * k + 1] - centring.im - im) ** 2;
-  }
-  const standardError = { re: Math.sqrt(sr / (n - 1) / n), im: Math.sqrt(si / (n - 1) / n) };
-  const natural = Math.sqrt((sr + si) / (n - 1));
-  const allowance = reference.allowanceFactor * natural;
+export function meanFinding(tally: TallyView, estimand: Estimand & { kind: 'mean' }, reference: Reference, power: PowerContext): CheckFinding {
+  const m = estimateMean(tally.state<StreamingMean>(estimand));
+  const allowance = reference.allowanceFactor * m.naturalSize;
   const evidence = toleranceTest({
-    observed: { re, im },
+    observed: m.estimate,
     expected: reference.expected,
     expectedSource: reference.expectedSource,
-    standardError,
-    standardErrorMethod: `sample standard deviation / √K over K = ${n} independent samples, per component`,
+    standardError: m.standardError,
+    standardErrorMethod: `sample standard deviation / √K over K = ${m.count} independent samples, per component`,
     allowance,
     allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × the statistic's standard deviation = ${allowance.toPrecision(3)})`,
-    sampleCount: n,
+    sampleCount: m.count,
   });
-  return measured(samples, evidence, standardError, powerScale(reference.expected, natural), power);
+  return measured(tally, evidence, m.standardError, powerScale(reference.expected, m.naturalSize), power);
 }
 
 /**
@@ -117,29 +93,27 @@ export function meanFinding(samples: FluctuationSamples, x: Statistic, centring:
  * have no cumulant of order ≥ 3, so their moments are the pairing sums). `reference.expected` is 0;
  * the allowance factor is relative to the scale of the tuple's moment, Π_i √E|X_i − EX_i|².
  */
-export function cumulantFinding(samples: FluctuationSamples, tuple: readonly Statistic[], reference: Reference, power: PowerContext): CheckFinding {
-  const columns = samples.columnsOnCommonSamples(tuple);
-  const k = jointCumulant(columns);
-  const natural = columns.reduce((p, c) => p * Math.sqrt(meanSquare(c)), 1);
+export function cumulantFinding(tally: TallyView, estimand: Estimand & { kind: 'cumulant' }, reference: Reference, power: PowerContext): CheckFinding {
+  const state = tally.state<StreamingCumulant>(estimand);
+  const k = estimateCumulant(state);
+  const natural = cumulantNaturalScale(state);
   const allowance = reference.allowanceFactor * natural;
   const evidence = toleranceTest({
     observed: k.estimate,
     expected: reference.expected,
     expectedSource: reference.expectedSource,
     standardError: k.standardError,
-    standardErrorMethod: `delete-one jackknife over K = ${k.count} independent samples (Efron and Stein 1981), per component`,
+    standardErrorMethod: `delta method over the streamed co-moments of the subset products, K = ${k.count} independent samples (first-order equal to the delete-one jackknife, Efron 1982, The Jackknife, the Bootstrap and Other Resampling Plans, SIAM; chapter from memory), per component`,
     allowance,
     allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × Π √E|X_i − EX_i|² = ${allowance.toPrecision(3)})`,
     sampleCount: k.count,
   });
-  return measured(samples, evidence, k.standardError, natural, power);
+  return measured(tally, evidence, k.standardError, natural, power);
 }
 
 /** Lag-1 autocorrelation of Re X in sample order against −1/K (independent samples). */
-export function independenceFinding(samples: FluctuationSamples, x: Statistic, power: PowerContext): CheckFinding {
-  const cx = samples.column(x);
-  const re = new Float64Array(cx.length / 2).map((_, k) => cx[2 * k]);
-  const r = lagOneAutocorrelation(re);
+export function independenceFinding(tally: TallyView, estimand: Estimand & { kind: 'autocorrelation' }, power: PowerContext): CheckFinding {
+  const r = estimateAutocorrelation(tally.state<StreamingAutocorrelation>(estimand));
   const evidence = toleranceTest({
     observed: r.estimate,
     expected: r.expectedUnderIndependence,
@@ -151,5 +125,5 @@ export function independenceFinding(samples: FluctuationSamples, x: Statistic, p
     allowanceReason: 'none: the white-noise band is exact to O(1/K) for any law with a finite variance',
     sampleCount: r.count,
   });
-  return measured(samples, evidence, r.standardError, 1, power);
+  return measured(tally, evidence, r.standardError, 1, power);
 }

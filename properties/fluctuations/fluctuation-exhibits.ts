@@ -2,8 +2,7 @@ import type { CheckFinding } from '../../harness/check-group.js';
 import type { Exhibit } from '../../harness/exhibit.js';
 import type { Quantity } from '../../harness/evidence.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
-import type { FluctuationSamples } from './fluctuation-samples.js';
-import type { Statistic } from './statistic-book.js';
+import type { LeadingValues } from './fluctuation-tally.js';
 
 const parts = (q: Quantity): [number, number] => (typeof q === 'number' ? [q, 0] : [q.re, q.im]);
 
@@ -24,14 +23,13 @@ export function observedAgainstPredicted(checks: readonly FluctuationCheck[], fi
   return { kind: 'observed-vs-predicted', points, label };
 }
 
-/** (x − x̄)/s of Re X over the samples, for a normal quantile plot of a statistic that should be Gaussian. */
-export function standardisedFluctuations(samples: FluctuationSamples, x: Statistic): Exhibit {
-  const column = samples.column(x);
-  const n = column.length / 2;
-  const re = Array.from({ length: n }, (_, k) => column[2 * k]);
+/** (x − x̄)/s of Re X over its leading samples, for a normal quantile plot of a statistic that should be Gaussian. */
+export function standardisedFluctuations(leading: LeadingValues, label: string): Exhibit {
+  const re = Array.from(leading.values.subarray(0, leading.count));
+  const n = re.length;
   const mean = re.reduce((a, b) => a + b, 0) / n;
   const sd = Math.sqrt(re.reduce((a, b) => a + (b - mean) ** 2, 0) / (n - 1));
-  return { kind: 'normal-quantiles', standardised: re.map((v) => (v - mean) / sd), label: `standardised Re ${x.label} (${n} samples)` };
+  return { kind: 'normal-quantiles', standardised: re.map((v) => (v - mean) / sd), label: `standardised Re ${label} (${n} samples)` };
 }
 
 /** The finding with an exhibit attached (a skipped finding is returned unchanged). */

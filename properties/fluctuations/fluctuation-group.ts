@@ -5,7 +5,9 @@ import type { PowerContext } from './detection-power.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { sampleCounts, SIXTH_ORDER_BUDGET } from './fluctuation-design.js';
 import { observedAgainstPredicted, standardisedFluctuations, withExhibit } from './fluctuation-exhibits.js';
-import { combineFluctuationRows, fluctuationSamplesOf, observeFluctuationBlock, type FluctuationRows } from './fluctuation-samples.js';
+import type { Estimand } from './estimand.js';
+import { observeFluctuationBlock, pilotChainValues } from './fluctuation-samples.js';
+import { combineStates, TallyView, type FluctuationTally } from './fluctuation-tally.js';
 import { linearStatisticChecks, meanCorrectionChecks } from './linear-statistic-checks.js';
 import { mesoscopicChecks } from './mesoscopic-checks.js';
 import { identityChainChecks, tracialChecks, weightedChecks } from './resolvent-checks.js';
@@ -26,6 +28,9 @@ export function fluctuationSkipReason(capabilities: ReadonlySet<string>): string
     : 'the implementation offers neither sample_statistics nor a sampler: nothing of it would be exercised (its per-matrix routines are checked by the identities suite)';
 }
 
+/** Samples of the pictured statistic kept for the report's normal quantile plot. */
+const PICTURED_SAMPLES = 1000;
+
 /** Runs a list of checks on one set of shared samples as a CheckGroup. */
 export function fluctuationGroup(
   id: string,
@@ -35,9 +40,15 @@ export function fluctuationGroup(
   counts: { spectral: number; weighted: number },
 ): FluctuationGroupPlan {
   const label = ensembleLabel(ensemble);
+  // Every check's estimands, and the leading values of the statistic whose Gaussian shape the
+  // report pictures (capped: memory stays fixed however many samples).
+  const gaussian = checks.findIndex((c) => c.shows !== undefined);
+  const shown: Estimand | undefined = gaussian >= 0 ? { kind: 'values', statistic: checks[gaussian].shows!, limit: PICTURED_SAMPLES } : undefined;
+  const estimands = [...checks.flatMap((c) => c.estimands), ...(shown === undefined ? [] : [shown])];
+  let pilot: Float64Array | undefined;
   return {
     statisticalChecks: checks.filter((c) => c.statistical).length,
-    group: (power): SampledGroup<FluctuationRows> => ({
+    group: (power): SampledGroup<FluctuationTally> => ({
       id,
       suite: 'fluctuations',
       checks: checks.map((c) => ({
@@ -48,18 +59,20 @@ export function fluctuationGroup(
       skipReason: fluctuationSkipReason,
       work: {
         setSizes: [counts.spectral],
-        observe: (context, _set, start, end) => observeFluctuationBlock(context, id, ensemble, book, counts, start, end),
-        combine: combineFluctuationRows,
-        conclude(_context, [rows]) {
-        const samples = fluctuationSamplesOf(rows, counts.spectral, counts.weighted);
-        const findings = checks.map((c) => c.evaluate(samples, power));
-        // Pictures for the report: all of the group's checks observed against predicted on the
-        // first, and the Gaussian shape of the first statistic on the check that uses it.
-        const first = findings.findIndex((f) => f.state === 'measured');
-        if (first >= 0) findings[first] = withExhibit(findings[first], observedAgainstPredicted(checks, findings, `${id}: observed against predicted`));
-        const gaussian = checks.findIndex((c) => c.shows !== undefined);
-        if (gaussian >= 0) findings[gaussian] = withExhibit(findings[gaussian], standardisedFluctuations(samples, checks[gaussian].shows!));
-        return findings;
+        observe(context, _set, start, end) {
+          pilot ??= pilotChainValues(context, id, ensemble, book);
+          return observeFluctuationBlock(context, id, ensemble, book, counts, estimands, pilot, start, end);
+        },
+        combine: (left, right) => ({ path: left.path, origin: left.origin, states: combineStates(estimands, left.states, right.states) }),
+        conclude(_context, [tally]) {
+          const view = new TallyView(estimands, tally);
+          const findings = checks.map((c) => c.evaluate(view, power));
+          // Pictures for the report: all of the group's checks observed against predicted on the
+          // first, and the Gaussian shape of the first statistic on the check that uses it.
+          const first = findings.findIndex((f) => f.state === 'measured');
+          if (first >= 0) findings[first] = withExhibit(findings[first], observedAgainstPredicted(checks, findings, `${id}: observed against predicted`));
+          if (shown !== undefined) findings[gaussian] = withExhibit(findings[gaussian], standardisedFluctuations(view.state(shown), checks[gaussian].shows!.label));
+          return findings;
         },
       },
     }),

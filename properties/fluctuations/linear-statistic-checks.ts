@@ -7,6 +7,7 @@ import { stieltjesSemicircle } from '../../reference-values/semicircle-law.js';
 import { covarianceCheck, finiteSizeAllowance, type Allowance } from './covariance-check.js';
 import { EXACT_POWER_SOURCE, LINEAR_SOURCE, MEAN_SOURCE, RESOLVENT_MEAN_SOURCE } from './covariance-sources.js';
 import { LINEAR_COVARIANCE_CONSTANT, MEAN_CORRECTION_CONSTANT, QUADRATURE_ALLOWANCE } from './fluctuation-allowances.js';
+import type { Estimand } from './estimand.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { Z_A } from './fluctuation-design.js';
 import { meanFinding } from './fluctuation-evidence.js';
@@ -95,25 +96,28 @@ export function meanCorrectionChecks(book: StatisticBook, ensemble: EnsembleSpec
       allowanceFactor: exactMoment !== null ? QUADRATURE.factor : allowance.factor,
       allowanceReason: exactMoment !== null ? QUADRATURE.reason : `${allowance.reason}, relative to the standard deviation of Tr f(H)`,
     };
+    const estimand: Estimand = { kind: 'mean', statistic: x, centring: complex(centring) };
     return {
       name: `mean/${name}`,
       title: `E Tr f(H) − N∫fρ_sc, f = ${name}, against ${exactMoment !== null ? 'its exact finite-N value' : 'the Bai–Yao correction'}`,
       statistical: true,
-      evaluate: (samples, power) => meanFinding(samples, x, complex(centring), reference, power),
+      estimands: [estimand],
+      evaluate: (tally, power) => meanFinding(tally, estimand, reference, power),
     };
   });
   const g = book.resolvent(Z_A);
   const m: Complex = scale(stieltjesSemicircle(Z_A), size);
   const expected = resolventMeanCorrection(Z_A, c);
+  const estimand: Estimand = { kind: 'mean', statistic: g, centring: m };
   checks.push({
     name: 'mean/resolvent',
     title: 'E Tr G(z) − N m(z) at z = Z_A against the resolvent form of the Bai–Yao correction',
     statistical: true,
-    evaluate: (samples, power) =>
+    estimands: [estimand],
+    evaluate: (tally, power) =>
       meanFinding(
-        samples,
-        g,
-        m,
+        tally,
+        estimand,
         { expected, expectedSource: RESOLVENT_MEAN_SOURCE, allowanceFactor: allowance.factor, allowanceReason: `${allowance.reason}, relative to the standard deviation of Tr G(z)` },
         power,
       ),

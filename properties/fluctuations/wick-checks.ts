@@ -2,6 +2,7 @@ import { complex, conj } from '../../harness/numeric/complex.js';
 import { WICK_SOURCE } from './covariance-sources.js';
 import type { EnsembleConstants } from '../../harness/numeric/ensemble.js';
 import { nonGaussianFactor, WICK_CONSTANT } from './fluctuation-allowances.js';
+import type { Estimand } from './estimand.js';
 import type { FluctuationCheck } from './fluctuation-check.js';
 import { designWeights, MESOSCOPIC_ENERGIES, MESOSCOPIC_GAMMA, Z_A, Z_B } from './fluctuation-design.js';
 import { cumulantFinding } from './fluctuation-evidence.js';
@@ -10,14 +11,16 @@ import { testFunction } from './test-functions.js';
 
 function wickCheck(name: string, title: string, tuple: Statistic[], size: number, g: number): FluctuationCheck {
   const order = tuple.length;
+  const estimand: Estimand = { kind: 'cumulant', tuple };
   return {
     name,
     title,
     statistical: true,
-    evaluate: (samples, power) =>
+    estimands: [estimand],
+    evaluate: (tally, power) =>
       cumulantFinding(
-        samples,
-        tuple,
+        tally,
+        estimand,
         {
           expected: complex(0),
           expectedSource: WICK_SOURCE,
