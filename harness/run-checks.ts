@@ -19,7 +19,7 @@ export interface RunProgress {
 }
 
 /** How the units run: in this thread unless a runner (a worker pool) is given. */
-export interface RunOptions {
+export interface ExecutionOptions {
   readonly runner?: (groups: readonly CheckGroup[], description: AdapterDescription) => Promise<UnitRunner>;
 }
 
@@ -56,7 +56,7 @@ export async function runUnits(
   groups: readonly CheckGroup[],
   record: (unit: WorkUnit, outcome: UnitOutcome) => void,
   abandon: (unit: WorkUnit) => boolean,
-  options: RunOptions,
+  options: ExecutionOptions,
   shard?: ShardChoice,
 ): Promise<string> {
   const context = contextFor(adapter, description, settings);
@@ -82,7 +82,7 @@ export async function runChecks(
   suites: readonly PropertySuite[],
   progress: RunProgress = {},
   adapterLog: () => string = () => '',
-  options: RunOptions = {},
+  options: ExecutionOptions = {},
 ): Promise<RunResult> {
   const description = await adapter.describe();
   const groups = planGroups(settings, suites);

@@ -2,12 +2,12 @@ import { availableParallelism } from 'node:os';
 import { ALL_CAPABILITIES, AdapterFault, type Adapter, type Capability } from '../../adapters/adapter.js';
 import { SUITES } from '../../properties/suite-registry.js';
 import type { PropertySuite } from '../check-group.js';
-import { WorkerPoolError, workerPoolRunner } from '../parallel/worker-pool.js';
-import { runChecks, type RunOptions } from '../run-checks.js';
+import { WorkerPoolError, workerPoolRunner, workerThreadsAvailable } from '../parallel/worker-pool.js';
+import { runChecks, type ExecutionOptions } from '../run-checks.js';
 import type { RunRecipe } from '../run-recipe.js';
 import type { RunSettings } from '../run-settings.js';
 import { runShard } from '../shards/run-shard.js';
-import { writeShardFile } from '../shards/shard-file.js';
+import { ensureShardFileWritable, ShardFileError, writeShardFile, type ShardRecord } from '../shards/shard-file.js';
 import type { ShardChoice } from '../work-unit.js';
 import { RecordingAdapter } from '../../adapters/recorded/recording-adapter.js';
 import { runCommand } from '../replay-command.js';
@@ -72,9 +72,13 @@ export function parseShard(text: string): ShardChoice {
   return { index, count };
 }
 
-/** Worker threads: --workers, else one per core; one when every call is recorded (a recording is one sequence). */
+/**
+ * Worker threads: --workers, else one per core; one when every call is recorded (a recording is one
+ * sequence) or when worker threads cannot start (the sources run without the build). The figures
+ * are the same whatever the number.
+ */
 function workerCount(args: CheckArguments): number {
-  if (args.workers === undefined) return args['record-to'] === undefined ? availableParallelism() : 1;
+  if (args.workers === undefined) return args['record-to'] === undefined && workerThreadsAvailable() ? availableParallelism() : 1;
   const workers = parseWholeNumber('workers', args.workers, 1, 256);
   if (workers > 1 && args['record-to'] !== undefined) throw new UsageError('--record-to records one sequence of calls: use it with --workers 1');
   return workers;
@@ -102,7 +106,7 @@ export async function runCheckCommand(args: CheckArguments, out: NodeJS.WriteStr
     const settings = resolveSettings(args, [opened.arguments, baseline?.replayArguments ?? ''].filter((w) => w !== '').join(' '));
     const recipe: RunRecipe = { settings, adapter: choice, ...(args.baseline === undefined ? {} : { baselineFile: args.baseline }) };
     const suites = [...settings.suites.flatMap((name) => SUITES.get(name) ?? []), ...(baseline === undefined ? [] : [baseline.suite])];
-    const options: RunOptions = workers > 1 ? { runner: (groups) => workerPoolRunner(recipe, groups.map((g) => g.id), workers) } : {};
+    const options: ExecutionOptions = workers > 1 ? { runner: (groups) => workerPoolRunner(recipe, groups.map((g) => g.id), workers) } : {};
     let code: number;
     try {
       code = shard === undefined ? await runWhole(adapter, recipe, suites, args, out, opened.log, options) : await runPart(adapter, recipe, suites, shard, args, out, opened.log, options);
@@ -126,7 +130,7 @@ async function runWhole(
   args: CheckArguments,
   out: NodeJS.WriteStream,
   adapterLog: () => string,
-  options: RunOptions,
+  options: ExecutionOptions,
 ): Promise<number> {
   const reporters = reportersFor(args, out);
   const result = await runChecks(
@@ -153,12 +157,19 @@ async function runPart(
   args: CheckArguments,
   out: NodeJS.WriteStream,
   adapterLog: () => string,
-  options: RunOptions,
+  options: ExecutionOptions,
 ): Promise<number> {
   const file = args['shard-file'] ?? `shard-${shard.index}-of-${shard.count}.json`;
   if (file.trim() === '') throw new UsageError('--shard-file needs a file');
-  const record = await runShard(adapter, recipe, suites, shard, adapterLog, options);
-  writeShardFile(file, record);
+  let record: ShardRecord;
+  try {
+    ensureShardFileWritable(file);
+    record = await runShard(adapter, recipe, suites, shard, adapterLog, options);
+    writeShardFile(file, record);
+  } catch (error) {
+    if (error instanceof ShardFileError) throw new UsageError(error.message);
+    throw error;
+  }
   const faults = record.units.filter((u) => u.outcome.kind === 'fault').length;
   out.write(
     `shard ${shard.index}/${shard.count}: ${record.units.length} units of work written to ${file}` +

@@ -1,3 +1,5 @@
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { RunRecipe } from '../run-recipe.js';
 import type { UnitOutcome } from '../unit-outcome.js';
@@ -21,6 +23,14 @@ interface PoolWorker {
 }
 
 const WORKER_SCRIPT = new URL('./unit-worker.js', import.meta.url);
+
+/**
+ * Whether worker threads can start here: they load the compiled worker script, which exists in the
+ * built package but not when the sources run under a TypeScript loader (a test runner, say).
+ */
+export function workerThreadsAvailable(): boolean {
+  return existsSync(fileURLToPath(WORKER_SCRIPT));
+}
 
 /** Starts one worker and waits until its adapter is open and its plan made. */
 function startWorker(setup: WorkerSetup): Promise<PoolWorker> {

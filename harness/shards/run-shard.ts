@@ -1,6 +1,6 @@
 import type { Adapter } from '../../adapters/adapter.js';
 import type { PropertySuite } from '../check-group.js';
-import { planGroups, runUnits, type RunOptions } from '../run-checks.js';
+import { planGroups, runUnits, type ExecutionOptions } from '../run-checks.js';
 import type { RunRecipe } from '../run-recipe.js';
 import type { UnitOutcome } from '../unit-outcome.js';
 import type { ShardChoice, WorkUnit } from '../work-unit.js';
@@ -23,7 +23,7 @@ export async function runShard(
   suites: readonly PropertySuite[],
   shard: ShardChoice,
   adapterLog: () => string = () => '',
-  options: RunOptions = {},
+  options: ExecutionOptions = {},
 ): Promise<ShardRecord> {
   const description = await adapter.describe();
   const groups = planGroups(recipe.settings, suites);

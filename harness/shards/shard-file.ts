@@ -1,4 +1,5 @@
-import { readFileSync, writeFileSync } from 'node:fs';
+import { accessSync, constants, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname } from 'node:path';
 import { isDeepStrictEqual } from 'node:util';
 import type { AdapterDescription } from '../../adapters/adapter.js';
 import type { RunRecipe } from '../run-recipe.js';
@@ -35,8 +36,24 @@ export function shardRecord(fields: Omit<ShardRecord, 'format' | 'formatVersion'
   return { format: SHARD_FORMAT, formatVersion: SHARD_FORMAT_VERSION, tool: { name: TOOL_NAME, version: TOOL_VERSION }, ...fields };
 }
 
+/** Checks before a shard runs that its file can be written, so that no computed work is lost at the end. */
+export function ensureShardFileWritable(file: string): void {
+  try {
+    mkdirSync(dirname(file), { recursive: true });
+    accessSync(existsSync(file) ? file : dirname(file), constants.W_OK);
+  } catch (error) {
+    throw new ShardFileError(`cannot write the shard file '${file}': ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
+  }
+}
+
+/** Writes the record (creating the file's folder if need be); a failure names the file and the reason. */
 export function writeShardFile(file: string, record: ShardRecord): void {
-  writeFileSync(file, JSON.stringify(toExactJson(record)) + '\n');
+  try {
+    mkdirSync(dirname(file), { recursive: true });
+    writeFileSync(file, JSON.stringify(toExactJson(record)) + '\n');
+  } catch (error) {
+    throw new ShardFileError(`cannot write the shard file '${file}': ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
+  }
 }
 
 export function readShardFile(file: string): ShardRecord {
