@@ -21,6 +21,8 @@ export interface BenchmarkRow {
   readonly unit: 'call' | 'sample';
   readonly workers: number;
   readonly ours_s: number;
+  /** CPU seconds of every thread over wall seconds on our side: the cores it kept busy (null if not measured). */
+  readonly cores_busy: number | null;
   readonly numpy_1thread_s: number | null;
   readonly numpy_s: number | null;
 }

@@ -7,7 +7,7 @@ import { inProcessRunner, type ThroughputRunner } from './throughput-runner.js';
  * Samples per second of the fluctuation statistics: per sample, draw a GOE matrix, its eigenvalues,
  * ⟨G(z)⟩ at four spectral parameters and Tr H⁴ (fluctuation-sample.ts). Ours by the dense route
  * (any ensemble) and by the tridiagonal model (GOE/GUE), on each runner given (throughput-runner.ts:
- * the in-process runner; a worker pool plugs in there), against numpy doing the dense route's work
+ * in process, and on worker threads), against numpy doing the dense route's work
  * in the same run (numpy-peer.py --mode fluctuation: standard_normal, symmetrise, eigvalsh, the same
  * ⟨G(z)⟩ and Tr H⁴). Rows are seconds per sample; the table prints samples per second beside them.
  */
@@ -51,18 +51,26 @@ async function runThroughput(options: BenchmarkOptions, runners: readonly Throug
         await runner.run(workload, Math.min(n, 64), 0, 8); // warm the JIT
         options.log(`fluctuation-throughput: N = ${n}, ${route}, ${runner.workers} worker(s), ${REPETITIONS} × ${count} samples`);
         let best = Number.POSITIVE_INFINITY;
-        for (let r = 0; r < REPETITIONS; r++) best = Math.min(best, (await runner.run(workload, n, r * count, count)) / count);
+        let coresBusy = 0;
+        for (let r = 0; r < REPETITIONS; r++) {
+          const timing = await runner.run(workload, n, r * count, count);
+          if (timing.wallSeconds / count < best) {
+            best = timing.wallSeconds / count;
+            coresBusy = timing.cpuSeconds / timing.wallSeconds;
+          }
+        }
         const routine = route === 'dense' ? 'fluctuation sample (dense GOE)' : 'fluctuation sample (tridiagonal model)';
-        timings.push({ routine, n, unit: 'sample', workers: runner.workers, ours: best, peer: 'fluctuation-sample' });
+        timings.push({ routine, n, unit: 'sample', workers: runner.workers, ours: best, coresBusy, peer: 'fluctuation-sample' });
       }
     }
   }
+  await Promise.all(runners.map((r) => r.close()));
   // The peer again after ours, best of both (numpy-peer.ts, bestOfPeerRuns).
   const single = bestOfPeerRuns([singleBefore, runNumpyPeer(peerArgs, true, options.log, 'fluctuation-throughput')]);
   const free = bestOfPeerRuns([freeBefore, runNumpyPeer(peerArgs, false, options.log, 'fluctuation-throughput')]);
   const notes = [
     `per sample: GOE matrix, eigenvalues, ⟨G(z)⟩ at z = ${Z.map(([re, im]) => `${re}+${im}i`).join(', ')}, Tr H⁴; numpy does the dense route's work`,
-    `runners: ${runners.map((r) => `${r.workers} worker(s), ${r.description}`).join('; ')} (a worker pool adds a runner: bench/throughput-runner.ts)`,
+    `runners: ${runners.map((r) => `${r.workers} worker(s), ${r.description}`).join('; ')}; cores busy = CPU time of every thread / wall time`,
     'numpy timed before and after ours; best of both runs',
     `numpy, 1 thread: ${single.description}`,
     `numpy, as it comes: ${free.description}`,

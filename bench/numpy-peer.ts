@@ -71,6 +71,8 @@ export interface OurTiming {
   readonly unit: BenchmarkRow['unit'];
   readonly workers: number;
   readonly ours: number;
+  /** CPU time over wall time of our side (all threads): how many cores it kept busy. */
+  readonly coresBusy?: number;
   /** The peer's routine name (its times are keyed "routine/n"). */
   readonly peer: string;
 }
@@ -83,6 +85,7 @@ export function rowsAgainstPeer(timings: readonly OurTiming[], single: NumpyPeer
     unit: t.unit,
     workers: t.workers,
     ours_s: t.ours,
+    cores_busy: t.coresBusy ?? null,
     numpy_1thread_s: single.times.get(`${t.peer}/${t.n}`) ?? null,
     numpy_s: free.times.get(`${t.peer}/${t.n}`) ?? null,
   }));

@@ -2,17 +2,24 @@ import { writeFileSync } from 'node:fs';
 import type { BenchmarkGroup, BenchmarkRow } from './benchmark-group.js';
 import { eigenBench } from './eigen-bench.js';
 import { fluctuationThroughputBench } from './fluctuation-throughput-bench.js';
-import { inProcessRunner } from './throughput-runner.js';
+import { inProcessRunner, workerThreadsRunner } from './throughput-runner.js';
 import { tridiagonalModelBench } from './tridiagonal-model-bench.js';
+import { checkRunBench } from './check-run-bench.js';
 
 /**
  * `npm run bench [-- --sizes 200,500] [--json FILE] [--group NAME]`: runs each benchmark group,
  * prints a table (ours, the peer, ratios ours/peer) and optionally writes the rows as JSON.
  * --sizes applies to every group run (pair it with --group). A new group is a file under bench/
- * exporting a BenchmarkGroup, added to GROUPS. The fluctuation-throughput group takes the list of
- * runners to time (throughput-runner.ts): a worker-pool runner goes into that list.
+ * exporting a BenchmarkGroup, added to GROUPS. The fluctuation-throughput group times each runner
+ * of throughput-runner.ts (in process, and two worker threads); check-run times whole runs of the
+ * harness with its worker pool at 1 and 2 workers.
  */
-const GROUPS: readonly BenchmarkGroup[] = [eigenBench, tridiagonalModelBench, fluctuationThroughputBench([inProcessRunner])];
+const GROUPS: readonly BenchmarkGroup[] = [
+  eigenBench,
+  tridiagonalModelBench,
+  fluctuationThroughputBench([inProcessRunner, workerThreadsRunner(2)]),
+  checkRunBench,
+];
 
 interface Arguments {
   readonly sizes: number[] | null;
@@ -63,12 +70,13 @@ function timeCell(x: number | null, unit: BenchmarkRow['unit']): string {
 }
 
 function table(rows: readonly BenchmarkRow[]): string {
-  const header = ['routine', 'N', 'workers', 'ours', 'numpy 1 thread', 'ours/numpy 1t', 'numpy', 'ours/numpy'];
+  const header = ['routine', 'N', 'workers', 'ours', 'cores busy', 'numpy 1 thread', 'ours/numpy 1t', 'numpy', 'ours/numpy'];
   const body = rows.map((r) => [
     r.routine,
     String(r.n),
     String(r.workers),
     timeCell(r.ours_s, r.unit),
+    r.cores_busy === null ? '' : r.cores_busy.toFixed(2),
     timeCell(r.numpy_1thread_s, r.unit),
     ratio(r.ours_s, r.numpy_1thread_s),
     timeCell(r.numpy_s, r.unit),
