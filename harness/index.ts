@@ -5,11 +5,20 @@
  */
 
 // Running checks
-export { runChecks, type RunProgress } from './run-checks.js';
+export { runChecks, type ExecutionOptions, type RunProgress } from './run-checks.js';
 export { resolveRunSettings, type RunOptions } from './resolve-run-settings.js';
 export { DEFAULT_ALPHA, DEFAULT_BUDGET, DEFAULT_LADDER, DEFAULT_SAMPLES, DEFAULT_SEED, DEFAULT_SIZES, type RunSettings } from './run-settings.js';
 export { SUITES, suiteNames } from '../properties/suite-registry.js';
-export type { CheckContext, CheckFinding, CheckGroup, PlannedCheck, PropertySuite } from './check-group.js';
+export type { CheckContext, CheckFinding, CheckGroup, ConcludeContext, PlannedCheck, PropertySuite, SampledGroup, WholeGroup } from './check-group.js';
+export { SAMPLE_BLOCK, type SampledWork } from './sampled-work.js';
+
+// Worker threads and shards
+export { workerPoolRunner, workerThreadsAvailable, WorkerPoolError } from './parallel/worker-pool.js';
+export type { RunRecipe } from './run-recipe.js';
+export type { ShardChoice } from './work-unit.js';
+export { runShard } from './shards/run-shard.js';
+export { mergeShards } from './shards/merge-shards.js';
+export { readShardFile, shardsOfOneRun, ShardFileError, writeShardFile, type ShardRecord } from './shards/shard-file.js';
 
 // Implementations
 export {
