@@ -1,16 +1,19 @@
 import { isDeepStrictEqual } from 'node:util';
-import { isSampled, type CheckGroup } from '../check-group.js';
+import { isSampled, type CheckFinding, type CheckGroup } from '../check-group.js';
 import { RunAssembly } from '../run-assembly.js';
 import { outcomeCollector, planGroups, resultOfRun, type RunProgress } from '../run-checks.js';
 import { suitesOfRecipe } from '../run-recipe.js';
 import type { RunResult } from '../run-result.js';
 import { blockCount } from '../sampled-work.js';
-import type { WorkUnit } from '../work-unit.js';
+import type { UnitOutcome } from '../unit-outcome.js';
+import { unitLabel, type WorkUnit } from '../work-unit.js';
 import { ShardFileError, type ShardRecord } from './shard-file.js';
 
 /** Whether a unit read from a file names a unit of this plan. */
-function isUnitOf(groups: readonly CheckGroup[], unit: WorkUnit): boolean {
-  const group = groups[unit?.group];
+function isUnitOf(groups: readonly CheckGroup[], value: unknown): value is WorkUnit {
+  if (typeof value !== 'object' || value === null || !Number.isInteger((value as WorkUnit).group)) return false;
+  const unit = value as WorkUnit;
+  const group = groups[unit.group];
   if (group === undefined) return false;
   if (unit.kind === 'whole') return !isSampled(group);
   return (
@@ -23,6 +26,43 @@ function isUnitOf(groups: readonly CheckGroup[], unit: WorkUnit): boolean {
     unit.block >= 0 &&
     unit.block < blockCount(group.work.setSizes[unit.set])
   );
+}
+
+/** A finding as the assembly and the verdicts read it: a skip with its reason, or a measurement with its evidence. */
+function isFinding(value: unknown): value is CheckFinding {
+  if (typeof value !== 'object' || value === null) return false;
+  const finding = value as Record<string, unknown>;
+  if (finding.state === 'skipped') return typeof finding.reason === 'string';
+  return finding.state === 'measured' && typeof finding.evidence === 'object' && finding.evidence !== null;
+}
+
+/**
+ * Whether an outcome read from a file is one that running this unit can give, with the members the
+ * assembly reads: a part for a block, one finding per check for a whole group. A damaged file is
+ * refused here rather than failing later as a TypeError or concluding from a part that is not there.
+ */
+function isOutcomeOf(group: CheckGroup, unit: WorkUnit, outcome: unknown): outcome is UnitOutcome {
+  if (typeof outcome !== 'object' || outcome === null) return false;
+  const o = outcome as Record<string, unknown>;
+  switch (o.kind) {
+    case 'part':
+      return unit.kind === 'block' && Object.hasOwn(o, 'part');
+    case 'findings':
+      return (
+        unit.kind === 'whole' &&
+        Array.isArray(o.findings) &&
+        o.findings.length === group.checks.length &&
+        o.findings.every(isFinding)
+      );
+    case 'unavailable':
+      return typeof o.reason === 'string';
+    case 'fault':
+      return typeof o.reason === 'string' && typeof o.faultKind === 'string' && typeof o.faultMethod === 'string';
+    case 'abandoned':
+      return true;
+    default:
+      return false;
+  }
 }
 
 /**
@@ -43,8 +83,12 @@ export function mergeShards(records: readonly ShardRecord[], progress: RunProgre
   const collect = outcomeCollector(groups, settings, first.adapter, progress);
   collect(assembly.releaseFinished());
   for (const record of records) {
-    for (const { unit, outcome } of record.units) {
-      if (!isUnitOf(groups, unit)) throw new ShardFileError(`shard ${record.shard.index}/${record.shard.count} holds a unit the plan does not have`);
+    for (const [at, entry] of record.units.entries()) {
+      const { unit, outcome } = (entry ?? {}) as { unit?: unknown; outcome?: unknown };
+      if (!isUnitOf(groups, unit)) throw new ShardFileError(`shard ${record.shard.index}/${record.shard.count} holds a unit the plan does not have (entry ${at})`);
+      if (!isOutcomeOf(groups[unit.group], unit, outcome)) {
+        throw new ShardFileError(`shard ${record.shard.index}/${record.shard.count} is damaged: the outcome of ${unitLabel(groups[unit.group], unit)} is malformed`);
+      }
       try {
         assembly.record(unit, outcome);
       } catch (error) {

@@ -56,6 +56,11 @@ export function writeShardFile(file: string, record: ShardRecord): void {
   }
 }
 
+/** An object, not null: what a member of a shard file that holds members must be (null would fail as a TypeError). */
+function isObject<T>(value: T | null | undefined): value is T {
+  return typeof value === 'object' && value !== null;
+}
+
 export function readShardFile(file: string): ShardRecord {
   let text: string;
   try {
@@ -77,17 +82,19 @@ export function readShardFile(file: string): ShardRecord {
   if (record.formatVersion !== SHARD_FORMAT_VERSION) {
     throw new ShardFileError(`'${file}' has shard format version ${String(record.formatVersion)}; this rmt-assay reads version ${SHARD_FORMAT_VERSION}`);
   }
-  const shard = record.shard;
+  const { shard, recipe, adapter } = record;
   if (
-    shard === undefined ||
+    !isObject(shard) ||
     !Number.isInteger(shard.count) ||
     !Number.isInteger(shard.index) ||
     shard.index < 1 ||
     shard.index > shard.count ||
     !Array.isArray(record.units) ||
     !Array.isArray(record.plan) ||
-    record.recipe === undefined ||
-    record.adapter === undefined
+    !isObject(recipe) ||
+    !isObject(recipe.settings) ||
+    !isObject(adapter) ||
+    !Array.isArray(adapter.capabilities)
   ) {
     throw new ShardFileError(`'${file}' is damaged: its shard, plan, recipe, adapter or units are missing or malformed`);
   }
