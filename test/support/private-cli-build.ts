@@ -1,6 +1,8 @@
 import { execFileSync, spawn, spawnSync } from 'node:child_process';
-import { copyFileSync, mkdirSync, readdirSync, rmSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 
 /** The package root, where the CLI runs (examples/ resolve from here). */
 export const PACKAGE_ROOT = join(import.meta.dirname, '..', '..');
@@ -27,6 +29,29 @@ export function buildPrivateCli(name: string): { readonly bin: string; readonly 
     throw error;
   }
   return { bin: join(outDir, 'harness', 'cli', 'main.js'), remove };
+}
+
+/**
+ * The CLI built for one test file (in its beforeAll) with a scratch folder for the files its runs
+ * write; both are removed in its afterAll. `bin()` is the built bin once beforeAll has run.
+ */
+export function privateCliForFile(name: string): { readonly bin: () => string; readonly folder: string } {
+  let build: ReturnType<typeof buildPrivateCli> | undefined;
+  const folder = mkdtempSync(join(tmpdir(), `rmt-assay-${name}-`));
+  beforeAll(() => {
+    build = buildPrivateCli(name);
+  }, 120_000);
+  afterAll(() => {
+    build?.remove();
+    rmSync(folder, { recursive: true, force: true });
+  });
+  return {
+    bin: () => {
+      if (build === undefined) throw new Error('the private CLI is built in beforeAll');
+      return build.bin;
+    },
+    folder,
+  };
 }
 
 function copyCertifiedTables(outDir: string): void {

@@ -1,9 +1,8 @@
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { expectNoCrash } from '../../support/cli-expectations.js';
-import { buildPrivateCli, runCli } from '../../support/private-cli-build.js';
+import { privateCliForFile, runCli } from '../../support/private-cli-build.js';
 import { hasNumpy, numpyMissingReason } from '../../support/python-availability.js';
 
 /**
@@ -11,16 +10,7 @@ import { hasNumpy, numpyMissingReason } from '../../support/python-availability.
  * JSON report is the same byte for byte whatever N, for the built-in engine, a program (--exec)
  * and a module (--module), each thread with its own adapter.
  */
-let build: ReturnType<typeof buildPrivateCli>;
-const folder = mkdtempSync(join(tmpdir(), 'rmt-assay-workers-'));
-
-beforeAll(() => {
-  build = buildPrivateCli('worker-count-identity');
-}, 120_000);
-afterAll(() => {
-  build?.remove();
-  rmSync(folder, { recursive: true, force: true });
-});
+const { bin, folder } = privateCliForFile('worker-count-identity');
 
 /** Small sizes: every statistical group still has two blocks of samples per set, most have more. */
 const SMALL = ['--size', '48', '--ladder', '32,48,64', '--samples', '64'];
@@ -29,7 +19,7 @@ const SMALL = ['--size', '48', '--ladder', '32,48,64', '--samples', '64'];
 function runWithWorkers(name: string, args: readonly string[], counts: readonly number[]): Array<{ workers: number; code: number | null; report: string }> {
   return counts.map((workers) => {
     const file = join(folder, `${name}-workers-${workers}.json`);
-    const run = runCli(build.bin, ['check', ...args, '--workers', String(workers), '--report', file]);
+    const run = runCli(bin(), ['check', ...args, '--workers', String(workers), '--report', file]);
     expectNoCrash(run);
     return { workers, code: run.code, report: readFileSync(file, 'utf8') };
   });

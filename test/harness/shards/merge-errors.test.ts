@@ -1,8 +1,7 @@
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { PassThrough } from 'node:stream';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { ReferenceAdapter } from '../../../adapters/reference-adapter.js';
 import { runCheckCommand, type CheckArguments } from '../../../harness/cli/check-command.js';
 import { withOptionDefaults } from '../../../harness/cli/declare-options.js';
@@ -13,7 +12,7 @@ import { suitesOfRecipe, type RunRecipe } from '../../../harness/run-recipe.js';
 import { runShard } from '../../../harness/shards/run-shard.js';
 import { writeShardFile } from '../../../harness/shards/shard-file.js';
 import { expectUsageError } from '../../support/cli-expectations.js';
-import { buildPrivateCli, runCli } from '../../support/private-cli-build.js';
+import { privateCliForFile, runCli } from '../../support/private-cli-build.js';
 import { testSettings } from '../../support/run-settings-for-tests.js';
 
 /**
@@ -21,8 +20,7 @@ import { testSettings } from '../../support/run-settings-for-tests.js';
  * line and exit code 2, through the built CLI. The shard files are written in this process by the
  * code `check --shard` runs (a tiny run: the semicircle and identity suites at N = 16).
  */
-let build: ReturnType<typeof buildPrivateCli>;
-const folder = mkdtempSync(join(tmpdir(), 'rmt-assay-merge-errors-'));
+const { bin, folder } = privateCliForFile('merge-errors');
 const shard = (index: number, seed = 3) => join(folder, `seed-${seed}-shard-${index}-of-4.json`);
 const file = (name: string) => join(folder, name);
 
@@ -43,16 +41,11 @@ function damagedCopy(name: string, index: number, damage: (record: { units: Arra
 }
 
 beforeAll(async () => {
-  build = buildPrivateCli('merge-errors');
   await writeShards(3, [1, 2, 3, 4]);
   await writeShards(4, [1]);
 }, 180_000);
-afterAll(() => {
-  build?.remove();
-  rmSync(folder, { recursive: true, force: true });
-});
 
-const merge = (...files: string[]) => runCli(build.bin, ['merge', ...files]);
+const merge = (...files: string[]) => runCli(bin(), ['merge', ...files]);
 /** Where a command run in this process writes its terminal output (nothing is read from it). */
 const quietOut = () => new PassThrough() as unknown as NodeJS.WriteStream;
 const others = (but: number) => [1, 2, 3, 4].filter((i) => i !== but).map((i) => shard(i));
@@ -174,6 +167,6 @@ describe('rmt-assay check refuses bad --shard and --workers options before it st
   }
 
   it('--shard 5/4 through the built CLI: exit code 2 and one line', () => {
-    expectUsageError(runCli(build.bin, ['check', '--shard', '5/4']), /^rmt-assay: --shard must be I\/N with 1 ≤ I ≤ N ≤ 10000 \(the I-th of N parts\), got '5\/4'\n$/);
+    expectUsageError(runCli(bin(), ['check', '--shard', '5/4']), /^rmt-assay: --shard must be I\/N with 1 ≤ I ≤ N ≤ 10000 \(the I-th of N parts\), got '5\/4'\n$/);
   });
 });
