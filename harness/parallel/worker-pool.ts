@@ -10,9 +10,6 @@ import type { FromWorker, ToWorker, WorkerSetup } from './worker-messages.js';
 /** A worker pool cannot start (its adapter does not open there, say): the run stops with this message. */
 export class WorkerPoolError extends Error {}
 
-/** How many times in all a worker that stopped is replaced before the pool gives up. */
-const REPLACEMENTS_PER_WORKER = 2;
-
 interface PoolWorker {
   readonly thread: Worker;
   /** The unit it is running, if any. */
@@ -20,6 +17,8 @@ interface PoolWorker {
   onMessage?: (message: FromWorker) => void;
   /** Called when the thread stops after it was ready. */
   onStop?: (reason: string) => void;
+  /** Why the thread stopped, once it has: it may stop after it was ready and before it is given work. */
+  stoppedBecause?: string;
 }
 
 const WORKER_SCRIPT = new URL('./unit-worker.js', import.meta.url);
@@ -49,13 +48,17 @@ function startWorker(setup: WorkerSetup): Promise<PoolWorker> {
       }
       worker.onMessage?.(message);
     });
+    const stop = (reason: string) => {
+      worker.stoppedBecause ??= reason;
+      worker.onStop?.(reason);
+    };
     worker.thread.on('error', (error) => {
       if (!ready) reject(new WorkerPoolError(`a worker thread could not start: ${error.message}`));
-      else worker.onStop?.(`worker thread stopped: ${error.message}`);
+      else stop(`worker thread stopped: ${error.message}`);
     });
     worker.thread.on('exit', (code) => {
       if (!ready) reject(new WorkerPoolError(`a worker thread exited (code ${code}) before it was ready`));
-      else worker.onStop?.(`worker thread exited with code ${code}`);
+      else stop(`worker thread exited with code ${code}`);
     });
   });
 }
@@ -65,7 +68,7 @@ function startWorker(setup: WorkerSetup): Promise<PoolWorker> {
  * in-process module is loaded once per thread, a program is started once per thread). Units are
  * handed out in order to whichever worker is free; outcomes are reported as they come, and the
  * run's assembly puts them back in order. A worker that stops (a crash of native code, an uncaught
- * error) faults the unit it was running and is replaced.
+ * error) faults the unit it was running and is replaced while units remain.
  */
 export async function workerPoolRunner(recipe: RunRecipe, groupIds: readonly string[], count: number): Promise<UnitRunner> {
   const setup: WorkerSetup = { recipe, groupIds };
@@ -76,8 +79,8 @@ export async function workerPoolRunner(recipe: RunRecipe, groupIds: readonly str
     await Promise.all(workers.map((w) => w.thread.terminate()));
     throw (failure as PromiseRejectedResult).reason;
   }
-  let replacements = REPLACEMENTS_PER_WORKER * count;
   const closed: string[] = [];
+  let closing = false;
 
   return {
     run(units, abandon, report) {
@@ -113,24 +116,30 @@ export async function workerPoolRunner(recipe: RunRecipe, groupIds: readonly str
           const unit = worker.busy;
           worker.busy = undefined;
           if (unit !== undefined) finish(unit, { kind: 'fault', faultKind: 'internal-error', faultMethod: 'harness', reason });
-          if (outstanding === 0) return;
-          if (replacements-- <= 0) {
-            reject(new WorkerPoolError(`${reason}; worker threads stopped too often, the run is given up`));
-            return;
-          }
+          // Replaced only while units wait to be handed out: a thread that stopped running a unit
+          // faulted it (and its group's other units are abandoned), so the replacements are bounded
+          // by the units, and a run whose implementation crashes in many groups still ends with
+          // those groups faulted rather than given up.
+          if (outstanding === 0 || next >= units.length) return;
           startWorker(setup).then((replacement) => {
+            // The other threads may have done the rest, and the pool been closed, while it started.
+            if (closing) return void replacement.thread.terminate();
             workers.push(replacement);
-            dispatch(replacement);
+            begin(replacement);
           }, reject);
         };
+        // A thread that stopped while the others were starting would never answer the unit it is sent.
+        const begin = (worker: PoolWorker) => (worker.stoppedBecause === undefined ? dispatch(worker) : stopped(worker, worker.stoppedBecause));
         if (outstanding === 0) resolve();
-        else for (const worker of [...workers]) dispatch(worker);
+        else for (const worker of [...workers]) begin(worker);
       });
     },
 
     async close() {
+      closing = true;
+      const running = workers.filter((worker) => worker.stoppedBecause === undefined);
       await Promise.all(
-        workers.map(
+        running.map(
           (worker) =>
             new Promise<void>((resolve) => {
               const timer = setTimeout(() => void worker.thread.terminate().then(() => resolve()), 10_000);
