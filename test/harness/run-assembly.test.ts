@@ -20,7 +20,7 @@ interface Delivery {
  * The semicircle suite at a tiny size: 100 samples are 4 blocks (the last of 4 samples) per set of
  * the per-size groups; the Kolmogorov-decay groups draw more at the small sizes of the ladder.
  */
-const settings = testSettings({ sizes: [16], ladder: [12, 16, 24], samples: 100, ensembles: [{ kind: 'goe' }, { kind: 'gue' }] });
+const settings = testSettings({ sizes: [16], ladder: [16, 24, 32], samples: 100, ensembles: [{ kind: 'goe' }, { kind: 'gue' }] });
 let groups: CheckGroup[];
 let concludeContext: ConcludeContext;
 /** Every unit's real outcome against the reference engine, in the run's unit order. */

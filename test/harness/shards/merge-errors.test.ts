@@ -25,7 +25,7 @@ const shard = (index: number, seed = 3) => join(folder, `seed-${seed}-shard-${in
 const file = (name: string) => join(folder, name);
 
 async function writeShards(seed: number, indices: readonly number[]): Promise<void> {
-  const settings = testSettings({ suites: ['semicircle', 'identities'], sizes: [16], ladder: [12, 16, 24], samples: 40, seed });
+  const settings = testSettings({ suites: ['semicircle', 'identities'], sizes: [16], ladder: [16, 24, 32], samples: 40, seed });
   const recipe: RunRecipe = { settings, adapter: { timeoutSeconds: 60 } };
   for (const index of indices) {
     writeShardFile(shard(index, seed), await runShard(new ReferenceAdapter(), recipe, suitesOfRecipe(recipe), { index, count: 4 }));
