@@ -17,7 +17,12 @@ interface GroupState {
   readonly skipReason: string | null;
   readonly expected: number;
   received: number;
-  /** The first fault, and else the first unavailability, by unit order. */
+  /**
+   * The first fault or unavailability by unit order, whichever it is. Not "a fault before an
+   * unavailability": a run abandons a group's later units at its first trouble, so a fault after an
+   * unavailability is seen or not depending on how the units were spread, while the first trouble
+   * by unit order always runs (a group's units are handed out in that order in every runner and shard).
+   */
   trouble?: { readonly ordinal: number; readonly outcome: Extract<UnitOutcome, { kind: 'fault' | 'unavailable' }> };
   findings?: readonly CheckFinding[];
   readonly sets: SetFold[];
@@ -59,11 +64,7 @@ export class RunAssembly {
       case 'fault':
       case 'unavailable': {
         const ordinal = ordinalOf(state.group, unit);
-        const rank = (o: typeof outcome) => (o.kind === 'fault' ? 0 : 1);
-        const known = state.trouble;
-        if (known === undefined || rank(outcome) < rank(known.outcome) || (rank(outcome) === rank(known.outcome) && ordinal < known.ordinal)) {
-          state.trouble = { ordinal, outcome };
-        }
+        if (state.trouble === undefined || ordinal < state.trouble.ordinal) state.trouble = { ordinal, outcome };
         state.sets.forEach((s) => s.early.clear());
         return;
       }
