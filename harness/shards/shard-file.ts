@@ -119,7 +119,7 @@ export function shardsOfOneRun(records: ReadonlyArray<{ readonly file: string; r
   for (const { file, record } of records.slice(1)) {
     for (const [what, of] of same) {
       if (!isDeepStrictEqual(of(record), of(first.record))) {
-        throw new ShardFileError(`'${file}' and '${first.file}' are not shards of one run: their ${what} differ`);
+        throw new ShardFileError(`'${file}' and '${first.file}' are not shards of one run: they differ in ${what}`);
       }
     }
   }

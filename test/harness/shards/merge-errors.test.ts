@@ -67,7 +67,7 @@ describe('rmt-assay merge refuses shard files that do not make one run, with one
   });
 
   it('shards of runs with different seeds', () => {
-    expectUsageError(merge(shard(1, 4), ...others(1)), /are not shards of one run: their settings \(suites, sizes, samples, seed, ensembles, adapter options\) differ/);
+    expectUsageError(merge(shard(1, 4), ...others(1)), /are not shards of one run: they differ in settings \(suites, sizes, samples, seed, ensembles, adapter options\)/);
   });
 
   it('a file that is not JSON', () => {
