@@ -103,7 +103,7 @@ export function cumulantFinding(tally: TallyView, estimand: Estimand & { kind: '
     expected: reference.expected,
     expectedSource: reference.expectedSource,
     standardError: k.standardError,
-    standardErrorMethod: `delta method over the streamed co-moments of the subset products, K = ${k.count} independent samples (first-order equal to the delete-one jackknife, Efron 1982, The Jackknife, the Bootstrap and Other Resampling Plans, SIAM; chapter from memory), per component`,
+    standardErrorMethod: `delta method over the streamed co-moments of the subset products, K = ${k.count} independent samples (first-order equal to the delete-one jackknife, Efron 1982, The Jackknife, the Bootstrap and Other Resampling Plans, SIAM, ch. 6, from memory), per component`,
     allowance,
     allowanceReason: `${reference.allowanceReason} (${reference.allowanceFactor.toPrecision(3)} × Π √E|X_i − EX_i|² = ${allowance.toPrecision(3)})`,
     sampleCount: k.count,
