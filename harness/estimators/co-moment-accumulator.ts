@@ -108,6 +108,11 @@ export function covarianceMatrixEntry(state: CoMoments, i: number, j: number): n
   return coMomentEntry(state, i, j) / (countOfAtLeast(state, 2, 'covarianceMatrixEntry') - 1);
 }
 
+/** The standard error of the mean of component i, s/√n with the unbiased sample variance (NaN below two samples). */
+export function standardErrorOfMean(state: CoMoments, i: number): number {
+  return state.count > 1 ? Math.sqrt(coMomentEntry(state, i, i) / (state.count - 1) / state.count) : NaN;
+}
+
 /**
  * E|Z − EZ|² = Var Re Z + Var Im Z (unbiased) of the complex quantity Z whose Re and Im are
  * components `re` and `re + 1`.

@@ -7,7 +7,7 @@ import { formatCitation } from '../../reference-values/citation.js';
 import { kolmogorovSlopeRange } from '../../reference-values/kolmogorov-rate.js';
 import { kolmogorovDistanceToSemicircle } from '../support/kolmogorov-distance.js';
 import { matrixSource } from '../support/matrix-source.js';
-import { addToMeanTally, combineMeanTallies, emptyMeanTally, standardErrorOfMean, type MeanTally } from '../support/running-means.js';
+import { addObservation, combineCoMoments, emptyCoMoments, standardErrorOfMean, type CoMoments } from '../../harness/estimators/co-moment-accumulator.js';
 import { eigenvalueOrigin, nothingToExercise, pathDescription, spectrumOf } from '../support/spectral-statistics.js';
 
 /**
@@ -46,15 +46,15 @@ export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettin
       async observe(context, set, start, end) {
         const size = ladder[set];
         const source = await matrixSource(context, `${id}/N=${size}`, ensemble, size, counts[set], false, { start, end });
-        let sums = emptyMeanTally(1);
+        const sums = emptyCoMoments(1);
         const row = new Float64Array(1);
         for await (const matrix of source.matrices) {
           row[0] = kolmogorovDistanceToSemicircle(await spectrumOf(context, matrix));
-          sums = addToMeanTally(sums, row);
+          addObservation(sums, row);
         }
         return { matrices: source.description.replace(/, N = \d+, \d+ matrices/, ''), sums };
       },
-      combine: (left, right) => ({ matrices: left.matrices, sums: combineMeanTallies(left.sums, right.sums) }),
+      combine: (left, right) => ({ matrices: left.matrices, sums: combineCoMoments(left.sums, right.sums) }),
       conclude(context, parts) {
         const logN: number[] = [];
         const logD: number[] = [];
@@ -110,5 +110,5 @@ export function kolmogorovDecayGroup(ensemble: EnsembleSpec, settings: RunSettin
 /** A block's tally at one size: the mean distance, and which sampler made the matrices. */
 interface DistancePart {
   readonly matrices: string;
-  readonly sums: MeanTally;
+  readonly sums: CoMoments;
 }

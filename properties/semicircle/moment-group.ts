@@ -8,7 +8,7 @@ import { builtInTable } from '../../reference-values/reference-table-catalog.js'
 import { semicircleEvenMoment } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
-import { addToMeanTally, combineMeanTallies, emptyMeanTally, standardErrorOfMean, type MeanTally } from '../support/running-means.js';
+import { addObservation, combineCoMoments, emptyCoMoments, standardErrorOfMean, type CoMoments } from '../../harness/estimators/co-moment-accumulator.js';
 import {
   addSpectrum,
   combineSpectralHistograms,
@@ -85,7 +85,7 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
       setSizes: [settings.samples],
       async observe(context, _set, start, end) {
         const source = await matrixSource(context, id, ensemble, size, settings.samples, false, { start, end });
-        let sums = emptyMeanTally(MAX_K);
+        const sums = emptyCoMoments(MAX_K);
         const row = new Float64Array(MAX_K);
         let histogram = emptySpectralHistogram();
         for await (const matrix of source.matrices) {
@@ -101,13 +101,13 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
             }
           }
           for (let k = 0; k < MAX_K; k++) row[k] /= size;
-          sums = addToMeanTally(sums, row);
+          addObservation(sums, row);
         }
         return { path: pathDescription(source.description, 'eigenvalues', eigenvalueOrigin(context)), sums, histogram };
       },
       combine: (left, right) => ({
         path: left.path,
-        sums: combineMeanTallies(left.sums, right.sums),
+        sums: combineCoMoments(left.sums, right.sums),
         histogram: combineSpectralHistograms(left.histogram, right.histogram),
       }),
       conclude(_context, [{ path, sums, histogram }]) {
@@ -143,6 +143,6 @@ export function momentGroup(ensemble: EnsembleSpec, size: number, settings: RunS
 /** A block's tally: the moments' means, the pooled spectrum, and where they came from. */
 interface MomentPart {
   readonly path: string;
-  readonly sums: MeanTally;
+  readonly sums: CoMoments;
   readonly histogram: SpectralHistogram;
 }

@@ -7,7 +7,7 @@ import { resolventMeanCorrection } from '../../reference-values/finite-n-correct
 import { stieltjesSemicircle } from '../../reference-values/semicircle-law.js';
 import { expansionParameter } from '../support/expansion-parameter.js';
 import { matrixSource } from '../support/matrix-source.js';
-import { addToMeanTally, combineMeanTallies, emptyMeanTally, standardErrorOfMean, type MeanTally } from '../support/running-means.js';
+import { addObservation, combineCoMoments, emptyCoMoments, standardErrorOfMean, type CoMoments } from '../../harness/estimators/co-moment-accumulator.js';
 import { drawSpectralParameters } from '../support/spectral-parameter-arbitraries.js';
 import { nothingToExercise, normalisedResolventTracesOf, pathDescription, resolventOrigin } from '../support/spectral-statistics.js';
 
@@ -66,7 +66,7 @@ export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, setting
       setSizes: [settings.samples],
       async observe(context, _set, start, end) {
         const source = await matrixSource(context, id, ensemble, size, settings.samples, false, { start, end });
-        let sums = emptyMeanTally(2 * points.length);
+        const sums = emptyCoMoments(2 * points.length);
         const row = new Float64Array(2 * points.length);
         for await (const matrix of source.matrices) {
           const traces = await normalisedResolventTracesOf(context, matrix, points);
@@ -74,11 +74,11 @@ export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, setting
             row[2 * j] = t.re;
             row[2 * j + 1] = t.im;
           });
-          sums = addToMeanTally(sums, row);
+          addObservation(sums, row);
         }
         return { path: pathDescription(source.description, 'resolvent_trace', resolventOrigin(context)), sums };
       },
-      combine: (left, right) => ({ path: left.path, sums: combineMeanTallies(left.sums, right.sums) }),
+      combine: (left, right) => ({ path: left.path, sums: combineCoMoments(left.sums, right.sums) }),
       conclude(_context, [{ path, sums }]) {
         return points.map((z, j) => ({
           state: 'measured',
@@ -102,5 +102,5 @@ export function stieltjesMeanGroup(ensemble: EnsembleSpec, size: number, setting
 /** A block's tally: the means of Re and Im ⟨G(z)⟩ at each point, and where the statistics came from. */
 interface StieltjesPart {
   readonly path: string;
-  readonly sums: MeanTally;
+  readonly sums: CoMoments;
 }
