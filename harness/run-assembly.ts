@@ -110,16 +110,14 @@ export class RunAssembly {
     const { group } = state;
     const checks = group.checks.map((c) => ({ ...c, suite: group.suite, replay: replayCommand(this.context.settings, group.suite, c.id) }));
     if (state.skipReason !== null) return checks.map((c) => ({ ...c, state: 'skipped', reason: state.skipReason! }));
+    if (state.trouble !== undefined) return this.troubleOutcomes(checks, state.trouble.outcome);
     let findings: readonly CheckFinding[];
-    const trouble = state.trouble?.outcome ?? (isSampled(group) ? undefined : state.findings === undefined ? outcomeOfError(new Error('no findings')) : undefined);
-    if (trouble === undefined) {
-      try {
-        findings = isSampled(group) ? group.work.conclude(this.context, state.sets.map((s) => s.folded)) : state.findings!;
-      } catch (error) {
-        return this.troubleOutcomes(checks, outcomeOfError(error) as Extract<UnitOutcome, { kind: 'fault' }>);
-      }
-    } else {
-      return this.troubleOutcomes(checks, trouble as Extract<UnitOutcome, { kind: 'fault' | 'unavailable' }>);
+    try {
+      if (isSampled(group)) findings = group.work.conclude(this.context, state.sets.map((s) => s.folded));
+      else if (state.findings === undefined) throw new Error(`${group.id} gave no findings`);
+      else findings = state.findings;
+    } catch (error) {
+      return this.troubleOutcomes(checks, outcomeOfError(error));
     }
     return checks.map((c, i) => {
       const finding = findings[i];

@@ -14,7 +14,7 @@ export type UnitOutcome =
   | { readonly kind: 'abandoned' };
 
 /** The outcome an error thrown while running a unit stands for. */
-export function outcomeOfError(error: unknown): UnitOutcome {
+export function outcomeOfError(error: unknown): Extract<UnitOutcome, { kind: 'fault' | 'unavailable' }> {
   if (error instanceof NotAvailable) return { kind: 'unavailable', reason: error.message };
   if (error instanceof AdapterFault) return { kind: 'fault', faultKind: error.kind, faultMethod: error.method, reason: `${error.method}: ${error.message}` };
   return { kind: 'fault', faultKind: 'internal-error', faultMethod: 'harness', reason: `harness error: ${(error as Error)?.message ?? String(error)}` };

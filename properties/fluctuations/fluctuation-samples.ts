@@ -7,7 +7,7 @@ import { sampleMatrix } from '../../harness/numeric/sample-wigner.js';
 import { matrixSource } from '../support/matrix-source.js';
 import type { Estimand } from './estimand.js';
 import { STATISTICS_BATCH } from './fluctuation-design.js';
-import { emptyStates, estimandValues, observeSample, type FluctuationTally } from './fluctuation-tally.js';
+import { emptyStates, estimandValues, layoutsOf, observeSample, type FluctuationTally } from './fluctuation-tally.js';
 import type { StatisticBook, Tier } from './statistic-book.js';
 
 /**
@@ -56,11 +56,12 @@ export async function observeFluctuationBlock(
 ): Promise<FluctuationTally> {
   const size = book.size;
   const { spectral: spectralCount, weighted: weightedCount } = counts;
-  const states = emptyStates(estimands, (e) => estimandValues(e, pilot));
+  const layouts = layoutsOf(estimands);
+  const states = emptyStates(estimands, (i) => estimandValues(layouts[i].statistics, pilot));
   const positions = { spectral: book.positionsFor('spectral'), weighted: book.positionsFor('weighted') };
   const tierOf = (k: number): Tier => (k < weightedCount ? 'weighted' : 'spectral');
   const observe = (k: number, tier: Tier, values: readonly Complex[]) =>
-    observeSample(estimands, states, chainRow(size, values, positions[tier]), tier === 'weighted', k);
+    observeSample(estimands, layouts, states, chainRow(size, values, positions[tier]), tier === 'weighted', k);
   const sampleStatistics = context.adapter.sampleStatistics;
   if (context.capabilities.has('sample_statistics') && sampleStatistics !== undefined) {
     if (start % STATISTICS_BATCH !== 0) throw new RangeError(`observeFluctuationBlock: ${start} does not start a batch`);

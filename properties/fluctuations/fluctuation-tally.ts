@@ -3,6 +3,7 @@ import { combineCovariance, observeCovariance, streamingCovariance, type Streami
 import { combineCumulant, observeCumulant, streamingCumulant, type StreamingCumulant } from '../../harness/estimators/streaming-joint-cumulant.js';
 import { combineMean, observeMean, streamingMean, type StreamingMean } from '../../harness/estimators/streaming-mean.js';
 import { statisticsOf, statisticValueInto, tierOf, type Estimand } from './estimand.js';
+import type { Statistic } from './statistic-book.js';
 
 /** The first values of Re X, up to a fixed number (memory does not grow past it). */
 export interface LeadingValues {
@@ -32,21 +33,21 @@ export interface FluctuationTally {
 }
 
 /**
- * Empty states. `pilot` holds the statistics' values on one pilot sample (Re, Im per statistic of
- * each estimand, in statisticsOf order): the fixed shifts that keep the moments of O(N) traces from
- * cancelling; any fixed shift leaves covariances and cumulants unchanged.
+ * Empty states. `pilot(i)` gives estimand i's statistics on one pilot sample (Re, Im per statistic,
+ * in statisticsOf order): the fixed shifts that keep the moments of O(N) traces from cancelling;
+ * any fixed shift leaves covariances and cumulants unchanged.
  */
-export function emptyStates(estimands: readonly Estimand[], pilot: (estimand: Estimand) => Float64Array): EstimandState[] {
-  return estimands.map((e): EstimandState => {
+export function emptyStates(estimands: readonly Estimand[], pilot: (index: number) => Float64Array): EstimandState[] {
+  return estimands.map((e, i): EstimandState => {
     switch (e.kind) {
       case 'covariance':
-        return streamingCovariance(e.pairs.length, pilot(e));
+        return streamingCovariance(e.pairs.length, pilot(i));
       case 'mean':
         return streamingMean(e.centring);
       case 'cumulant':
-        return streamingCumulant(e.tuple.length, pilot(e));
+        return streamingCumulant(e.tuple.length, pilot(i));
       case 'autocorrelation':
-        return streamingAutocorrelation(pilot(e)[0]);
+        return streamingAutocorrelation(pilot(i)[0]);
       case 'values':
         return { count: 0, values: new Float64Array(e.limit) };
       case 'worst-unit-deviation':
@@ -55,9 +56,21 @@ export function emptyStates(estimands: readonly Estimand[], pilot: (estimand: Es
   });
 }
 
+/**
+ * What a sample gives each estimand: its statistics in the order of its state's layout, and whether
+ * only the weighted samples carry them. Worked out once per block, not per sample.
+ */
+export interface EstimandLayout {
+  readonly statistics: readonly Statistic[];
+  readonly weightedOnly: boolean;
+}
+
+export function layoutsOf(estimands: readonly Estimand[]): EstimandLayout[] {
+  return estimands.map((e) => ({ statistics: statisticsOf(e), weightedOnly: tierOf(e) === 'weighted' }));
+}
+
 /** The values of an estimand's statistics on one sample (Re, Im each), from the sample's chain values. */
-export function estimandValues(estimand: Estimand, chains: Float64Array): Float64Array {
-  const statistics = statisticsOf(estimand);
+export function estimandValues(statistics: readonly Statistic[], chains: Float64Array): Float64Array {
   const out = new Float64Array(2 * statistics.length);
   statistics.forEach((s, i) => statisticValueInto(s, chains, out, 2 * i));
   return out;
@@ -67,10 +80,17 @@ export function estimandValues(estimand: Estimand, chains: Float64Array): Float6
  * Adds sample `index` to every state whose estimand it carries (weighted estimands only on the
  * weighted prefix); returns the states, updated in place where the state allows.
  */
-export function observeSample(estimands: readonly Estimand[], states: EstimandState[], chains: Float64Array, weighted: boolean, index: number): void {
+export function observeSample(
+  estimands: readonly Estimand[],
+  layouts: readonly EstimandLayout[],
+  states: EstimandState[],
+  chains: Float64Array,
+  weighted: boolean,
+  index: number,
+): void {
   estimands.forEach((e, i) => {
-    if (!weighted && tierOf(e) === 'weighted') return;
-    const values = estimandValues(e, chains);
+    if (!weighted && layouts[i].weightedOnly) return;
+    const values = estimandValues(layouts[i].statistics, chains);
     const state = states[i];
     switch (e.kind) {
       case 'covariance':
